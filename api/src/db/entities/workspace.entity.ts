@@ -1,0 +1,19 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, Unique } from 'typeorm';
+
+/** A team's space: its codebases, members and settings. */
+@Entity({ name: 'workspace' })
+@Unique('UQ_workspace_slug', ['slug'])
+export class Workspace {
+  @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'PK_workspace' })
+  id!: string;
+
+  /** Short stable handle, unique across the installation (e.g. `otterbay`). */
+  @Column({ type: 'varchar', length: 64 })
+  slug!: string;
+
+  @Column({ type: 'varchar', length: 200 })
+  name!: string;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt!: Date;
+}
