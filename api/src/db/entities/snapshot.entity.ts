@@ -46,7 +46,7 @@ export class Snapshot {
   branch!: string | null;
 
   /** The counting settings and limit the analysis used. */
-  @Column({ type: 'jsonb', default: () => "'{}'::jsonb" })
+  @Column({ type: 'jsonb', default: {} })
   settings!: Record<string, unknown>;
 
   @Column({ type: 'jsonb', nullable: true })

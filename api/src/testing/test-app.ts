@@ -1,0 +1,34 @@
+import type { Express } from 'express';
+import type { Pool } from 'pg';
+import type { DataSource } from 'typeorm';
+import { createApp } from '../app';
+import type { Config } from '../config';
+import { createLogger } from '../logger';
+import { openTestDataSource, openTestSessionPool, testConfig } from './test-database';
+
+/** The real app on the real test database, for supertest. */
+export interface TestApp {
+  app: Express;
+  dataSource: DataSource;
+  sessionPool: Pool;
+  config: Config;
+  close(): Promise<void>;
+}
+
+/** Builds the app with test settings; call `close()` in afterAll. */
+export async function openTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const config = testConfig(env);
+  const dataSource = await openTestDataSource();
+  const sessionPool = openTestSessionPool();
+  const app = createApp({ config, dataSource, sessionPool, logger: createLogger('api-test', 'silent') });
+  return {
+    app,
+    dataSource,
+    sessionPool,
+    config,
+    async close() {
+      await sessionPool.end();
+      await dataSource.destroy();
+    },
+  };
+}
