@@ -13,6 +13,7 @@ import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRoutes } from './http/health/health.routes';
 import { meRoutes } from './http/me/me.routes';
 import { outboxRoutes } from './http/outbox/outbox.routes';
+import { SESSION_COOKIE } from './auth/saml-session';
 import { staticWeb } from './http/static-web';
 import type { Logger } from './logger';
 
@@ -57,7 +58,7 @@ export function createApp(deps: AppDeps): Express {
   const PgStore = connectPgSimple(session);
   app.use(
     session({
-      name: 'seamline.sid',
+      name: SESSION_COOKIE,
       secret: config.sessionSecret,
       store: new PgStore({ pool: deps.sessionPool, tableName: 'http_session', createTableIfMissing: false }),
       resave: false,
