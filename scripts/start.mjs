@@ -8,8 +8,8 @@ import { buildAll } from './lib/build.mjs';
 import { fail, step } from './lib/log.mjs';
 import { ensureNodeDependencies } from './lib/node-deps.mjs';
 import { LocalPostgres } from './lib/postgres.mjs';
-import { assertPortFree, ProcessGroup, waitForHttp, waitForPort } from './lib/processes.mjs';
-import { run } from './lib/run.mjs';
+import { assertPortFree, formatLine, ProcessGroup, waitForHttp, waitForPort } from './lib/processes.mjs';
+import { capture } from './lib/run.mjs';
 import { ensureSecret } from './lib/secrets.mjs';
 import { ensureSystemPackages } from './lib/system-packages.mjs';
 
@@ -42,8 +42,9 @@ async function stopEverything(code) {
   step('stopped; nothing is left running.');
   process.exit(code);
 }
-process.on('SIGINT', () => stopEverything(0));
-process.on('SIGTERM', () => stopEverything(0));
+for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(signal, () => stopEverything(0));
+// A closed terminal must not cut the shutdown short: writes to it fail quietly.
+for (const stream of [process.stdout, process.stderr]) stream.on('error', () => {});
 
 async function main() {
   const started = Date.now();
@@ -70,7 +71,8 @@ async function main() {
     SEAMLINE_SMTP_PORT: String(ports.smtp),
   };
   step('applying migrations and seeding the invented demo workspace…');
-  run(process.execPath, [path.join(serverDist, 'api/src/db/migrate.js')], { env: { ...process.env, ...env } });
+  const migrated = capture(process.execPath, [path.join(serverDist, 'api/src/db/migrate.js')], { env: { ...process.env, ...env } });
+  for (const line of migrated.split('\n').filter(Boolean)) step(formatLine(line));
 
   group.start('idp', path.join(serverDist, 'api/src/fakes/identity-provider/main.js'), env);
   group.start('mail', path.join(serverDist, 'api/src/fakes/mail/main.js'), env);

@@ -53,7 +53,17 @@ export function createApp(deps: AppDeps): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // One short line per request: what was asked and how it ended, without headers.
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+    }),
+  );
 
   const PgStore = connectPgSimple(session);
   app.use(

@@ -66,7 +66,8 @@ export class ProcessGroup {
 const LEVELS = { 10: 'trace', 20: 'debug', 30: 'info', 40: 'warn', 50: 'error', 60: 'fatal' };
 const SKIP = new Set(['level', 'time', 'pid', 'hostname', 'name', 'process', 'msg', 'v']);
 
-function formatLine(line) {
+/** Shortens a pino JSON line to `level: message  field=value…`; other lines pass unchanged. */
+export function formatLine(line) {
   if (!line.startsWith('{')) return line;
   try {
     const entry = JSON.parse(line);
