@@ -1,0 +1,65 @@
+import * as path from 'node:path';
+import { computeTotals } from '../metrics/computeTotals';
+import { SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type SkippedFile, type Snapshot } from '../model';
+import { analyseFiles, defaultThreads } from './analyseFiles';
+import { listSourceFiles } from './listSourceFiles';
+import { analyzerVersion } from './analyzerVersion';
+
+export { ScanInputError } from './ScanInputError';
+
+export interface ScanOptions {
+  settings: CountingSettings;
+  /** A tsconfig to take the file list from (default: `<dir>/tsconfig.json` when present). */
+  tsconfig?: string;
+  /** Include each function's source text. */
+  embedSource?: boolean;
+  /** Worker threads (default: one per core). */
+  threads?: number;
+}
+
+export interface ScanProgress {
+  phase: 'discover' | 'analyse';
+  done: number;
+  total: number;
+  file?: string;
+}
+
+/**
+ * Scans a folder into a snapshot: lists the files, measures them in parallel, and sums the
+ * totals. Throws ScanInputError when the scan cannot start; problems with single files are
+ * reported in `files.skipped` and never stop the scan.
+ */
+export async function scanDirectory(dir: string, options: ScanOptions, onProgress?: (p: ScanProgress) => void): Promise<Snapshot> {
+  const root = path.resolve(dir);
+  const listed = listSourceFiles(root, options.tsconfig);
+  onProgress?.({ phase: 'discover', done: listed.files.length, total: listed.files.length });
+
+  const functions: FunctionRecord[] = [];
+  const skipped: SkippedFile[] = [...listed.skipped];
+  let done = 0;
+  let loc = 0;
+  await analyseFiles({ root, settings: options.settings, embedSource: !!options.embedSource }, listed.files, options.threads ?? defaultThreads(), (result) => {
+    if ('functions' in result) {
+      functions.push(...result.functions);
+      loc += result.loc;
+    }
+    else skipped.push(result.skipped);
+    onProgress?.({ phase: 'analyse', done: ++done, total: listed.files.length, file: result.file });
+  });
+
+  // Completion order depends on the threads; the snapshot must not.
+  functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.line - b.line || a.id.localeCompare(b.id)));
+  skipped.sort((a, b) => a.file.localeCompare(b.file));
+  const listedFiles = new Set(listed.files);
+  const analysedFiles = listed.files.length - skipped.filter((s) => listedFiles.has(s.file)).length;
+  return {
+    schema: SNAPSHOT_SCHEMA,
+    generator: { name: 'seamline', version: analyzerVersion() },
+    createdAt: new Date().toISOString(),
+    root: path.basename(root),
+    settings: { ...options.settings },
+    files: { scanned: analysedFiles, skipped },
+    functions,
+    totals: computeTotals(functions, { files: analysedFiles, loc }, options.settings.limit),
+  };
+}

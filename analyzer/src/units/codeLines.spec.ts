@@ -1,0 +1,25 @@
+import { ts } from 'ts-morph';
+import { CodeLines } from './codeLines';
+
+function codeLines(code: string) {
+  return new CodeLines(ts.createSourceFile('a.ts', code, ts.ScriptTarget.Latest, true));
+}
+
+describe('CodeLines', () => {
+  it('should count lines holding code and skip comments and blank lines', () => {
+    const lines = codeLines(['// header', '', 'function f() {', '  /* note */', '  return 1; // one', '}', ''].join('\n'));
+    expect(lines.count(1, 7)).toBe(3);
+    expect(lines.count(3, 3)).toBe(1);
+    expect(lines.count(4, 4)).toBe(0);
+  });
+
+  it('should count every line of a multi-line template as code', () => {
+    expect(codeLines('const t = `a\n\nb`;').count(1, 3)).toBe(3);
+  });
+
+  it('should count overlapping ranges once', () => {
+    const lines = codeLines('a();\nb();\nc();\nd();');
+    expect(lines.countUnion([[1, 3], [2, 2], [4, 4]])).toBe(4);
+    expect(lines.countUnion([])).toBe(0);
+  });
+});
