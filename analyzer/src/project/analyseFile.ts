@@ -13,6 +13,8 @@ export interface FileJob {
   root: string;
   settings: CountingSettings;
   embedSource: boolean;
+  /** Files with a longer line are skipped as minified; 0 turns the check off. */
+  maxLineLength: number;
 }
 
 /**
@@ -25,7 +27,7 @@ export function analyseFile(job: FileJob, file: string): FileResult {
     const size = fs.statSync(absolute).size;
     if (size > MAX_FILE_BYTES) return { file, skipped: { file, reason: 'too-large', detail: `${size} bytes` } };
     const text = fs.readFileSync(absolute, 'utf8');
-    const skip = classifySource(text);
+    const skip = classifySource(text, job.maxLineLength);
     if (skip) return { file, skipped: { file, ...skip } };
     return { file, ...analyzeSource(file, text, job.settings, { embedSource: job.embedSource }) };
   } catch (err) {

@@ -20,3 +20,11 @@ describe('classifySource', () => {
     expect(result?.detail).toMatch(/^line 2 has 1202 characters/);
   });
 });
+
+describe('classifySource with another line limit', () => {
+  it('should measure long-lined files when the check is turned off', () => {
+    expect(classifySource(`${'x+'.repeat(600)}1;`, 0)).toBeUndefined();
+    expect(classifySource(`${'x+'.repeat(600)}1;`, 2000)).toBeUndefined();
+    expect(classifySource(`${'x+'.repeat(600)}1;`, 100)?.reason).toBe('minified');
+  });
+});

@@ -10,7 +10,9 @@ const MARKER_LINES = 10;
  * marker near the top — common practice among code generators) and minified files (a line over
  * 1,000 characters). Hand-written code is measured; machine-written code would only add noise.
  */
-export function classifySource(text: string): Pick<SkippedFile, 'reason' | 'detail'> | undefined {
+export function classifySource(text: string, maxLineLength = MAX_LINE_LENGTH): Pick<SkippedFile, 'reason' | 'detail'> | undefined {
+  // 0 (or less) turns the minified check off, e.g. to measure a large bundled file on purpose.
+  const limit = maxLineLength > 0 ? maxLineLength : Number.POSITIVE_INFINITY;
   let lineStart = 0;
   for (let lineNo = 1; lineStart <= text.length; lineNo++) {
     let lineEnd = text.indexOf('\n', lineStart);
@@ -18,8 +20,8 @@ export function classifySource(text: string): Pick<SkippedFile, 'reason' | 'deta
     if (lineNo <= MARKER_LINES && text.slice(lineStart, lineEnd).includes('@generated')) {
       return { reason: 'generated', detail: `a @generated marker on line ${lineNo}` };
     }
-    if (lineEnd - lineStart > MAX_LINE_LENGTH) {
-      return { reason: 'minified', detail: `line ${lineNo} has ${lineEnd - lineStart} characters (more than ${MAX_LINE_LENGTH})` };
+    if (lineEnd - lineStart > limit) {
+      return { reason: 'minified', detail: `line ${lineNo} has ${lineEnd - lineStart} characters (more than ${limit})` };
     }
     lineStart = lineEnd + 1;
   }

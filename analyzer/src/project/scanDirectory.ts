@@ -3,6 +3,7 @@ import { computeTotals } from '../metrics/computeTotals';
 import { SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type SkippedFile, type Snapshot } from '../model';
 import { analyseFiles, defaultThreads } from './analyseFiles';
 import { listSourceFiles } from './listSourceFiles';
+import { MAX_LINE_LENGTH } from './classifySource';
 import { analyzerVersion } from './analyzerVersion';
 
 export { ScanInputError } from './ScanInputError';
@@ -13,6 +14,8 @@ export interface ScanOptions {
   tsconfig?: string;
   /** Include each function's source text. */
   embedSource?: boolean;
+  /** Files with a line longer than this are skipped as minified (default 1,000; 0 turns the check off). */
+  maxLineLength?: number;
   /** Worker threads (default: one per core). */
   threads?: number;
 }
@@ -38,7 +41,8 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
   const skipped: SkippedFile[] = [...listed.skipped];
   let done = 0;
   let loc = 0;
-  await analyseFiles({ root, settings: options.settings, embedSource: !!options.embedSource }, listed.files, options.threads ?? defaultThreads(), (result) => {
+  const job = { root, settings: options.settings, embedSource: !!options.embedSource, maxLineLength: options.maxLineLength ?? MAX_LINE_LENGTH };
+  await analyseFiles(job, listed.files, options.threads ?? defaultThreads(), (result) => {
     if ('functions' in result) {
       functions.push(...result.functions);
       loc += result.loc;

@@ -23,8 +23,9 @@ export class CodeLines {
     });
     while (stack.length > 0) {
       const node = stack.pop()!;
-      const start = ts.skipTrivia(sourceFile.text, node.pos);
-      if (start >= node.end) continue; // an empty node (e.g. a missing expression)
+      // An empty node (an omitted expression) or the end-of-file marker holds no code.
+      if (node.pos === node.end || node.kind === ts.SyntaxKind.EndOfFileToken) continue;
+      const start = node.getStart(sourceFile);
       const first = lineOf(start);
       const last = lineOf(node.end - 1);
       isCode[first] = 1;

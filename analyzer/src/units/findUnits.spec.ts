@@ -90,3 +90,12 @@ describe('findUnits', () => {
     expect(units(code)).toEqual(['top-level <top-level>']);
   });
 });
+
+describe('unit spans', () => {
+  it('should start a decorated method at its first modifier, not at the decorator or comments', () => {
+    const { unitSpan } = require('./unitSpan') as typeof import('./unitSpan');
+    const sf = ts.createSourceFile('a.ts', 'class A {\n  /** doc */\n  @Get()\n  static\n  m() {\n  }\n}', ts.ScriptTarget.Latest, true);
+    const method = (sf.statements[0] as ts.ClassDeclaration).members[0];
+    expect(unitSpan(method, sf)).toMatchObject({ line: 4, endLine: 6 });
+  });
+});

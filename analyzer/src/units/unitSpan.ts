@@ -10,7 +10,7 @@ export function unitSpan(node: ts.Node, sourceFile: ts.SourceFile): { start: num
     start = node.statements.length ? node.statements[0].getStart(sourceFile) : 0;
   } else {
     const decorators = ts.canHaveDecorators(node) ? ts.getDecorators(node) : undefined;
-    start = decorators?.length ? ts.skipTrivia(sourceFile.text, decorators[decorators.length - 1].end) : node.getStart(sourceFile);
+    start = decorators?.length ? firstAfterDecorators(node, sourceFile) : node.getStart(sourceFile);
   }
   const end = ts.isSourceFile(node) ? Math.max(start, lastStatementEnd(node)) : node.end;
   const line = sourceFile.getLineAndCharacterOfPosition(start).line + 1;
@@ -21,4 +21,11 @@ export function unitSpan(node: ts.Node, sourceFile: ts.SourceFile): { start: num
 function lastStatementEnd(sourceFile: ts.SourceFile): number {
   const last = sourceFile.statements[sourceFile.statements.length - 1];
   return last ? last.end : 0;
+}
+
+// A decorated member starts at its first modifier (`static`, `async`…) or, without one, its name.
+function firstAfterDecorators(node: ts.Node, sourceFile: ts.SourceFile): number {
+  const modifier = ts.canHaveModifiers(node) ? ts.getModifiers(node)?.[0] : undefined;
+  const name = (node as { name?: ts.Node }).name;
+  return (modifier ?? name ?? node).getStart(sourceFile);
 }

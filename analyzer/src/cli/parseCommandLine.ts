@@ -1,0 +1,192 @@
+/**
+ * Parse the command line
+ * ======================
+ * Turns `argv` (without node and the script) into one command, or throws a `UsageError` with one
+ * line that says what is wrong. Options are parsed strictly with node:util `parseArgs`; its
+ * errors are reworded (`unknown option --foo`, `option --out needs a value`). `--help` anywhere
+ * before `--` wins over every other problem, so a half-typed command can still ask for help.
+ *
+ * [Reference]: Node.js util.parseArgs; POSIX utility conventions (exit 2 on a usage error, common practice).
+ */
+import { parseArgs } from 'node:util';
+import { DEFAULT_SETTINGS } from '../model/CountingSettings';
+import type { CountingSettings } from '../model/CountingSettings';
+import { UsageError } from './UsageError';
+
+/** What `seamline scan` was asked to do. */
+export interface ScanCommand {
+  kind: 'scan';
+  dir: string;
+  tsconfig?: string;
+  format: 'json' | 'sarif' | 'csv';
+  table: 'functions';
+  out?: string;
+  pretty: boolean;
+  embedSource: boolean;
+  settings: CountingSettings;
+  coverage?: string;
+  /** False with `--no-calls`. */
+  calls: boolean;
+  /** Files with a longer line are skipped as minified; 0 turns the check off. */
+  maxLineLength?: number;
+  /** Worker threads; default one per core. */
+  threads?: number;
+}
+
+/** What `seamline check` was asked to do. */
+export interface CheckCommand {
+  kind: 'check';
+  snapshot: string;
+  /** From `--limit`; absent means the snapshot's own limit. */
+  limit?: number;
+  baseline?: string;
+}
+
+/** Any command line Seamline understands. */
+export type CliCommand = ScanCommand | CheckCommand | { kind: 'help'; topic?: 'scan' | 'check' } | { kind: 'version' };
+
+const SCAN_OPTIONS = {
+  tsconfig: { type: 'string' },
+  format: { type: 'string', short: 'f' },
+  table: { type: 'string' },
+  out: { type: 'string', short: 'o' },
+  pretty: { type: 'boolean' },
+  'embed-source': { type: 'boolean' },
+  limit: { type: 'string' },
+  switch: { type: 'string' },
+  'optional-chaining': { type: 'boolean' },
+  'default-values': { type: 'boolean' },
+  coverage: { type: 'string' },
+  'no-calls': { type: 'boolean' },
+  'max-line-length': { type: 'string' },
+  threads: { type: 'string' },
+  help: { type: 'boolean', short: 'h' },
+} as const;
+
+const CHECK_OPTIONS = {
+  limit: { type: 'string' },
+  baseline: { type: 'string' },
+  help: { type: 'boolean', short: 'h' },
+} as const;
+
+const LATER_FORMATS: Record<string, string> = { graphml: 'the module map' };
+const LATER_TABLES: Record<string, string> = { modules: 'the module map', clusters: 'the module map' };
+
+function wantsHelp(args: readonly string[]): boolean {
+  const end = args.indexOf('--');
+  return (end === -1 ? args : args.slice(0, end)).some((a) => a === '--help' || a === '-h');
+}
+
+// parseArgs' messages are long and vary by Node version; its error codes do not.
+function reword(error: unknown, command: 'scan' | 'check'): UsageError {
+  const { code, message } = error as { code?: string; message: string };
+  // `Option '-o, --out <value>' argument missing`: name the long form.
+  const option = /'(?:-\w, )?(-[^' ,]+)/.exec(message)?.[1];
+  if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION') return new UsageError(`unknown option ${option ?? message}`, command);
+  if (code === 'ERR_PARSE_ARGS_INVALID_OPTION_VALUE' && option) {
+    return /does not take/.test(message)
+      ? new UsageError(`option ${option} does not take a value`, command)
+      : new UsageError(`option ${option} needs a value`, command);
+  }
+  return new UsageError(message, command);
+}
+
+function parse<T extends typeof SCAN_OPTIONS | typeof CHECK_OPTIONS>(args: string[], options: T, command: 'scan' | 'check') {
+  try {
+    return parseArgs({ args, options, strict: true, allowPositionals: true });
+  } catch (error) {
+    throw reword(error, command);
+  }
+}
+
+function oneOf<V extends string>(value: string, allowed: readonly V[], option: string, command: 'scan' | 'check'): V {
+  if ((allowed as readonly string[]).includes(value)) return value as V;
+  throw new UsageError(`${option} must be ${allowed.join(' or ')}, got '${value}'`, command);
+}
+
+function parseLimit(value: string, command: 'scan' | 'check'): number {
+  const n = /^\d+$/.test(value) ? Number(value) : NaN;
+  if (!Number.isSafeInteger(n) || n < 1) throw new UsageError(`--limit must be a whole number of at least 1, got '${value}'`, command);
+  return n;
+}
+
+function parseCount(value: string, option: string, min: number): number {
+  const n = /^\d+$/.test(value) ? Number(value) : NaN;
+  if (!Number.isSafeInteger(n) || n < min) throw new UsageError(`${option} must be a whole number of at least ${min}, got '${value}'`, 'scan');
+  return n;
+}
+
+function onePositional(positionals: string[], what: string, command: 'scan' | 'check'): string {
+  if (positionals.length === 0) throw new UsageError(`missing ${what}`, command);
+  if (positionals.length > 1) {
+    throw new UsageError(`expects one ${what}, got ${positionals.length}: ${positionals.join(' ')}`, command);
+  }
+  return positionals[0];
+}
+
+function parseScan(args: string[]): ScanCommand {
+  const { values, positionals } = parse(args, SCAN_OPTIONS, 'scan');
+  const dir = onePositional(positionals, 'folder to scan', 'scan');
+  const formatValue = values.format ?? 'json';
+  if (LATER_FORMATS[formatValue]) {
+    throw new UsageError(`--format ${formatValue} arrives with ${LATER_FORMATS[formatValue]}; this version writes json, sarif or csv`, 'scan');
+  }
+  const format = oneOf(formatValue, ['json', 'sarif', 'csv'] as const, '--format', 'scan');
+  const tableValue = values.table ?? 'functions';
+  if (LATER_TABLES[tableValue]) {
+    throw new UsageError(`--table ${tableValue} arrives with ${LATER_TABLES[tableValue]}; this version writes --table functions`, 'scan');
+  }
+  const table = oneOf(tableValue, ['functions'] as const, '--table', 'scan');
+  if (values.table !== undefined && format !== 'csv') throw new UsageError('--table applies only to --format csv', 'scan');
+  if (values.pretty && format === 'csv') throw new UsageError('--pretty applies only to --format json or sarif', 'scan');
+  return {
+    kind: 'scan',
+    dir,
+    tsconfig: values.tsconfig,
+    format,
+    table,
+    out: values.out,
+    pretty: values.pretty ?? false,
+    embedSource: values['embed-source'] ?? false,
+    settings: {
+      switch: oneOf(values.switch ?? DEFAULT_SETTINGS.switch, ['cases', 'one'] as const, '--switch', 'scan'),
+      optionalChaining: values['optional-chaining'] ?? DEFAULT_SETTINGS.optionalChaining,
+      defaultValues: values['default-values'] ?? DEFAULT_SETTINGS.defaultValues,
+      limit: values.limit === undefined ? DEFAULT_SETTINGS.limit : parseLimit(values.limit, 'scan'),
+    },
+    coverage: values.coverage,
+    calls: !values['no-calls'],
+    maxLineLength: values['max-line-length'] === undefined ? undefined : parseCount(values['max-line-length'], '--max-line-length', 0),
+    threads: values.threads === undefined ? undefined : parseCount(values.threads, '--threads', 1),
+  };
+}
+
+function parseCheck(args: string[]): CheckCommand {
+  const { values, positionals } = parse(args, CHECK_OPTIONS, 'check');
+  return {
+    kind: 'check',
+    snapshot: onePositional(positionals, 'snapshot file to check', 'check'),
+    limit: values.limit === undefined ? undefined : parseLimit(values.limit, 'check'),
+    baseline: values.baseline,
+  };
+}
+
+/** The command `argv` asks for; throws UsageError for anything else. */
+export function parseCommandLine(argv: readonly string[]): CliCommand {
+  const [first, ...rest] = argv;
+  if (first === 'scan' || first === 'check') {
+    if (wantsHelp(rest)) return { kind: 'help', topic: first };
+    return first === 'scan' ? parseScan(rest) : parseCheck(rest);
+  }
+  if (first === undefined) throw new UsageError('no command given (scan or check)');
+  if (first === '--help' || first === '-h') return { kind: 'help' };
+  if (first === 'help') {
+    const topic = rest[0];
+    if (topic === undefined) return { kind: 'help' };
+    if (topic === 'scan' || topic === 'check') return { kind: 'help', topic };
+    throw new UsageError(`no help for '${topic}': the commands are scan and check`);
+  }
+  if (first === '--version') return { kind: 'version' };
+  if (first.startsWith('-')) throw new UsageError(`unknown option ${first} (options go after the command)`);
+  throw new UsageError(`unknown command '${first}': the commands are scan and check`);
+}

@@ -1,0 +1,55 @@
+#!/usr/bin/env node
+// `npm run bench`: speed and memory as ratios against baselines measured in the same run.
+// Each task runs in its own process (time from inside the process, after start-up; peak RSS
+// from the process itself, worker threads included); medians over several alternating rounds.
+import { spawnSync } from 'node:child_process';
+import * as os from 'node:os';
+import * as path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const ROUNDS = Number(process.env.SEAMLINE_BENCH_ROUNDS ?? 5);
+
+function task(script, ...args) {
+  const r = spawnSync(process.execPath, [path.join(root, 'scripts/bench', script), ...args], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 24 });
+  if (r.status !== 0) throw new Error(`${script} ${args.join(' ')} failed:\n${r.stderr}`);
+  return JSON.parse(r.stdout.trim().split('\n').pop());
+}
+
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+function measure(tasks, rounds) {
+  const runs = Object.fromEntries(Object.keys(tasks).map((k) => [k, []]));
+  for (let i = 0; i < rounds; i++) for (const [name, run] of Object.entries(tasks)) runs[name].push(run());
+  return Object.fromEntries(Object.entries(runs).map(([k, rs]) => [k, { ms: median(rs.map((r) => r.ms)), mb: median(rs.map((r) => r.maxRssKb)) / 1024, last: rs[rs.length - 1] }]));
+}
+
+const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
+if (build.status !== 0) process.exit(1);
+
+console.log(`Seamline benchmarks — ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0].model}, ${Math.round(os.totalmem() / 2 ** 30)} GiB, node ${process.version}, ${ROUNDS} rounds (medians)\n`);
+const rx = measure({ parse: () => task('parse.cjs'), scan: () => task('scan.cjs'), eslint: () => task('eslint.cjs') }, ROUNDS);
+const f = (x) => x.toFixed(0);
+const r = (x) => x.toFixed(2);
+console.log(`rxjs@7.8.2 src: ${rx.scan.last.files} files, ${rx.scan.last.functions} functions`);
+console.log('| task | median time (ms) | peak memory (MB) |');
+console.log('| --- | ---: | ---: |');
+console.log(`| bare parse (typescript ${(await import('typescript')).default.version}, 1 process) | ${f(rx.parse.ms)} | ${f(rx.parse.mb)} |`);
+console.log(`| seamline scan --no-calls (graphs, ev(G), JSON written; ${os.availableParallelism()} threads) | ${f(rx.scan.ms)} | ${f(rx.scan.mb)} |`);
+console.log(`| ESLint complexity rule alone (1 process) | ${f(rx.eslint.ms)} | ${f(rx.eslint.mb)} |`);
+console.log('');
+const ratios = [
+  ['scan time / parse time', rx.scan.ms / rx.parse.ms, '≤ 1.5', rx.scan.ms / rx.parse.ms <= 1.5],
+  ['ESLint time / scan time', rx.eslint.ms / rx.scan.ms, '≥ 3', rx.eslint.ms / rx.scan.ms >= 3],
+  ['scan memory / parse memory', rx.scan.mb / rx.parse.mb, '≤ 2', rx.scan.mb / rx.parse.mb <= 2],
+];
+console.log('| ratio | measured | target | met |');
+console.log('| --- | ---: | ---: | --- |');
+for (const [name, value, target, met] of ratios) console.log(`| ${name} | ${r(value)} | ${target} | ${met ? 'yes' : 'no'} |`);
+
+const large = measure({ parse: () => task('parse.cjs', 'large'), scan: () => task('scan.cjs', 'large') }, Math.max(1, Math.min(3, ROUNDS)));
+console.log(`\ntypescript/lib/typescript.js (one file; no ratio asked):`);
+console.log('| task | median time (ms) | peak memory (MB) |');
+console.log('| --- | ---: | ---: |');
+console.log(`| bare parse | ${f(large.parse.ms)} | ${f(large.parse.mb)} |`);
+console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions) | ${f(large.scan.ms)} | ${f(large.scan.mb)} |`);

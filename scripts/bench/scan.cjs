@@ -1,0 +1,36 @@
+// Ours: `seamline scan` without the call graph, both cores, writing the snapshot JSON.
+const fs = require('node:fs');
+const os = require('node:os');
+const path = require('node:path');
+const { rxjsFiles, largeFile } = require('./corpus.cjs');
+
+const root = path.resolve(__dirname, '../..');
+const { runCli } = require(path.join(root, 'dist/analyzer/analyzer/src/cli/main.js'));
+const { Writable } = require('node:stream');
+
+const sink = () => new Writable({ write(_c, _e, cb) { cb(); } });
+async function main() {
+  let target;
+  let tmpDir;
+  if (process.argv[2] === 'large') {
+    // One file in a folder of its own, so the scan sees exactly that file.
+    tmpDir = fs.mkdtempSync(path.join(os.tmpdir(), 'seamline-bench-'));
+    fs.copyFileSync(largeFile(), path.join(tmpDir, 'typescript.js'));
+    target = tmpDir;
+  } else {
+    target = rxjsFiles().root;
+  }
+  const out = path.join(os.tmpdir(), `seamline-bench-${process.pid}.json`);
+  const started = process.hrtime.bigint();
+  const code = await runCli(['scan', target, '--no-calls', '--max-line-length', '0', '--out', out], { stdout: sink(), stderr: sink(), cwd: root, isTTY: false });
+  const ms = Number(process.hrtime.bigint() - started) / 1e6;
+  const snapshot = JSON.parse(fs.readFileSync(out, 'utf8'));
+  fs.rmSync(out, { force: true });
+  if (tmpDir) fs.rmSync(tmpDir, { recursive: true, force: true });
+  if (code !== 0) throw new Error(`scan exited with ${code}`);
+  console.log(JSON.stringify({ ms, maxRssKb: process.resourceUsage().maxRSS, files: snapshot.files.scanned, functions: snapshot.functions.length }));
+}
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
