@@ -52,7 +52,7 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
   });
 
   // Completion order depends on the threads; the snapshot must not.
-  functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.line - b.line || a.id.localeCompare(b.id)));
+  functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : topLevelFirst(a, b) || a.line - b.line || a.id.localeCompare(b.id)));
   skipped.sort((a, b) => a.file.localeCompare(b.file));
   const listedFiles = new Set(listed.files);
   const analysedFiles = listed.files.length - skipped.filter((s) => listedFiles.has(s.file)).length;
@@ -66,4 +66,8 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
     functions,
     totals: computeTotals(functions, { files: analysedFiles, loc }, options.settings.limit),
   };
+}
+
+function topLevelFirst(a: FunctionRecord, b: FunctionRecord): number {
+  return (a.kind === 'top-level' ? 0 : 1) - (b.kind === 'top-level' ? 0 : 1);
 }
