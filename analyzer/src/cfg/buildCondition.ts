@@ -9,10 +9,12 @@
  * last operand of the whole condition. Anything else (`??`, `?:`, calls…) is built as a value and
  * then tested once by the owner's block.
  *
- *   if (a && b || c) T else F        [a]──t──▶[b]──t──▶ T      [a] = decision of `&&`
- *                                     │f       │f      ▲        [b] = decision of `||`
- *                                     └───────▶[c]──t──┘        [c] = decision of `if`
- *                                               └──f──▶ F
+ *   if (a && b || c) T(); else F();
+ *
+ *   [a]──t──▶[b]──t─────▶[T]     [a] decision of `&&` (tests its left operand a)
+ *    │f       │f          ▲      [b] decision of `||` (tests the last operand of a && b)
+ *    └───────▶[c]──t──────┘      [c] decision of `if` (tests the last operand of the condition)
+ *              └──f──▶[F]
  *
  * Edge cases: a left-deep chain `a && b && … ` is walked along its left spine with a loop (a
  * 5,000-term chain does not overflow); labels under `!` stay relative to the owner's own meaning

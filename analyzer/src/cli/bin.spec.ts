@@ -69,12 +69,12 @@ describe('analyzer/bin/seamline.js', () => {
     expect(usage.status).toBe(2);
     expect(usage.stderr).toBe("seamline check: --limit must be a whole number of at least 1, got 'x'\nRun `seamline check --help` for usage.\n");
 
-    // Enough files for the compiled scan to use its worker threads.
+    // Threads asked for explicitly, so the compiled scan runs its worker threads on small code.
     await fsp.mkdir(path.join(root, 'code'));
     for (let i = 0; i < 30; i++) {
       await fsp.writeFile(path.join(root, 'code', `m${i}.ts`), `export function f${i}(a: number) {\n  return a > ${i} ? 1 : 0;\n}\n`);
     }
-    const scan = node(bin, ['scan', 'code', '--format', 'csv'], root);
+    const scan = node(bin, ['scan', 'code', '--format', 'csv', '--threads', '2'], root);
     expect(scan.status).toBe(0);
     const rows = scan.stdout.trimEnd().split('\r\n');
     const cyclomatic = rows[0].split(',').indexOf('cyclomatic');

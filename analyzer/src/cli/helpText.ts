@@ -43,7 +43,8 @@ Input:
   --coverage <file>       import an lcov or Istanbul JSON coverage report
   --no-calls              skip the call graph
   --max-line-length <n>   skip files with a longer line as minified (default 1000; 0: never)
-  --threads <n>           analysis threads (default: one per core)
+  --threads <n>           analysis threads (default: as many as the code's size pays for,
+                          up to one per core)
 
 Progress goes to stderr, with a summary line at the end.
 The limit of 10 is a rule of thumb, not a verdict: teams commonly allow up to 15 with a reason.

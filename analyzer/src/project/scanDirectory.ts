@@ -1,7 +1,7 @@
 import * as path from 'node:path';
 import { computeTotals } from '../metrics/computeTotals';
 import { SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type SkippedFile, type Snapshot } from '../model';
-import { analyseFiles, defaultThreads } from './analyseFiles';
+import { analyseFiles } from './analyseFiles';
 import { listSourceFiles } from './listSourceFiles';
 import { MAX_LINE_LENGTH } from './classifySource';
 import { analyzerVersion } from './analyzerVersion';
@@ -16,7 +16,7 @@ export interface ScanOptions {
   embedSource?: boolean;
   /** Files with a line longer than this are skipped as minified (default 1,000; 0 turns the check off). */
   maxLineLength?: number;
-  /** Worker threads (default: one per core). */
+  /** Worker threads (default: as many as the code's size pays for, up to one per core). */
   threads?: number;
 }
 
@@ -42,7 +42,7 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
   let done = 0;
   let loc = 0;
   const job = { root, settings: options.settings, embedSource: !!options.embedSource, maxLineLength: options.maxLineLength ?? MAX_LINE_LENGTH };
-  await analyseFiles(job, listed.files, options.threads ?? defaultThreads(), (result) => {
+  await analyseFiles(job, listed.files, options.threads, (result) => {
     if ('functions' in result) {
       functions.push(...result.functions);
       loc += result.loc;
