@@ -2,7 +2,7 @@ import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
 import { DEFAULT_SETTINGS } from '../model';
-import { validateSnapshot } from '../snapshot/validateSnapshot';
+import { snapshotSchemaProblems } from '../snapshot/validateSnapshot';
 import { scanDirectory, type ScanProgress } from './scanDirectory';
 
 function tree(files: Record<string, string>): string {
@@ -40,7 +40,7 @@ describe('scanDirectory', () => {
     expect(snapshot.totals).toEqual({ files: 1, loc: 4, functions: 2, cyclomatic: 3, cyclomaticStrict: 3, decisions: 1, overLimit: 0 });
     expect(snapshot.root).toBe(path.basename(root));
     expect(progress.at(-1)).toMatchObject({ phase: 'analyse', done: 4, total: 4 });
-    expect(validateSnapshot(snapshot)).toEqual([]);
+    expect(snapshotSchemaProblems(snapshot)).toEqual([]);
   });
 
   it('should give the same ids to functions whose code did not move, and follow moved code by fingerprint', async () => {
