@@ -53,7 +53,9 @@ export interface SourceAnalysis {
 
 /** Measures every unit of one file; `file` is the posix path relative to the scanned root. */
 export function analyzeSource(file: string, text: string, settings: CountingSettings, options: AnalyzeOptions = {}): SourceAnalysis {
-  const sourceFile = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, true, scriptKindOf(file));
+  // JSDoc says nothing about control flow; not parsing it saves a third of the parse on documented code.
+  const parseOptions = { languageVersion: ts.ScriptTarget.Latest, jsDocParsingMode: ts.JSDocParsingMode.ParseNone };
+  const sourceFile = ts.createSourceFile(file, text, parseOptions, true, scriptKindOf(file));
   const syntaxError = firstSyntaxError(sourceFile);
   if (syntaxError) throw new SourceSyntaxError(file, syntaxError.line, syntaxError.column, syntaxError.message);
 

@@ -23,3 +23,15 @@ describe('CodeLines', () => {
     expect(lines.countUnion([])).toBe(0);
   });
 });
+
+describe('CodeLines on tricky lexical cases', () => {
+  it('should not take comment markers inside strings, templates or regular expressions for comments', () => {
+    const lines = codeLines(['const url = "http://x"; // c', "const re = /\\/\\/*/g;", 'const t = `a /* b', '', '${ "}" } c */`;', '/* real', 'comment */', 'end();'].join('\n'));
+    expect([1, 2, 3, 4, 5, 6, 7, 8].map((l) => lines.count(l, l))).toEqual([1, 1, 1, 1, 1, 0, 0, 1]);
+  });
+
+  it('should divide after an operand rather than start a regular expression', () => {
+    const lines = codeLines(['const half = total / 2; // one', '// two', 'next();'].join('\n'));
+    expect([1, 2, 3].map((l) => lines.count(l, l))).toEqual([1, 0, 1]);
+  });
+});

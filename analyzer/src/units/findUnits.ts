@@ -36,6 +36,8 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
   pushChildren(stack, sourceFile, [], []);
   while (stack.length > 0) {
     const { node, display, stable } = stack.pop()!;
+    // Types hold no code to run, so no units; skipping them spares much of a typed file.
+    if (ts.isTypeNode(node) && !ts.isExpressionWithTypeArguments(node)) continue;
     const kind = unitKind(node, hasDecision);
     if (kind) {
       const own = unitName(node, sourceFile);

@@ -12,58 +12,72 @@
 import { createHash } from 'node:crypto';
 import { ts } from 'ts-morph';
 
-/** 16 hex digits of SHA-256 over the normalised body; `isNestedUnit` marks the units inside it. */
+/** 16 hex digits of SHA-1 over the normalised body; `isNestedUnit` marks the units inside it. */
 export function fingerprint(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean): string {
-  const locals = declaredNames(node, isNestedUnit);
-  const hash = createHash('sha256');
+  // One walk: tokens go into `parts`; identifiers that might be locals are resolved once the
+  // walk has seen every declaration (a local may be used before its declaration).
+  const parts: string[] = [];
+  const identifiers: number[] = [];
+  const locals = new Map<string, number>();
   const stack: ts.Node[] = [node];
   while (stack.length > 0) {
     const n = stack.pop()!;
-    hash.update(String(n.kind));
-    if (ts.isIdentifier(n) || ts.isPrivateIdentifier(n)) {
-      const local = locals.get(n.text);
-      hash.update(local !== undefined && !isPropertyName(n) ? `$${local}` : n.text);
-    } else if (ts.isLiteralExpression(n) || ts.isTemplateLiteralToken(n)) {
-      hash.update(n.text);
-    } else if (ts.isBinaryExpression(n)) {
-      hash.update(String(n.operatorToken.kind));
-    } else if (ts.isPrefixUnaryExpression(n) || ts.isPostfixUnaryExpression(n)) {
-      hash.update(String(n.operator));
+    const kind = n.kind;
+    if (kind === ts.SyntaxKind.Identifier || kind === ts.SyntaxKind.PrivateIdentifier) {
+      const text = (n as ts.Identifier).text;
+      if (isDeclarationName(n)) {
+        if (!locals.has(text)) locals.set(text, locals.size);
+      }
+      if (isPropertyName(n)) parts.push(text);
+      else {
+        identifiers.push(parts.length);
+        parts.push(text);
+      }
+      continue;
     }
-    hash.update(';');
+    if (kind >= ts.SyntaxKind.FirstLiteralToken && kind <= ts.SyntaxKind.LastTemplateToken) {
+      parts.push(`${kind}:${(n as ts.LiteralLikeNode).text}`);
+      continue;
+    }
+    if (kind === ts.SyntaxKind.BinaryExpression) parts.push(`${kind}:${(n as ts.BinaryExpression).operatorToken.kind}`);
+    else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) {
+      parts.push(`${kind}:${(n as ts.PrefixUnaryExpression).operator}`);
+    } else parts.push(String(kind));
     if (n !== node && isNestedUnit(n)) continue;
-    const children: ts.Node[] = [];
+    const start = stack.length;
     ts.forEachChild(n, (c) => {
-      children.push(c);
+      stack.push(c);
     });
-    for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+    reverse(stack, start);
   }
-  return hash.digest('hex').slice(0, 16);
+  for (const i of identifiers) {
+    const local = locals.get(parts[i]);
+    if (local !== undefined) parts[i] = `$${local}`;
+  }
+  return createHash('sha1').update(parts.join('\u0001')).digest('hex').slice(0, 16);
 }
 
-function declaredNames(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean): Map<string, number> {
-  const names = new Map<string, number>();
-  const add = (name: ts.Node | undefined) => {
-    if (name && ts.isIdentifier(name) && !names.has(name.text)) names.set(name.text, names.size);
-  };
-  const stack: ts.Node[] = [node];
-  while (stack.length > 0) {
-    const n = stack.pop()!;
-    if (ts.isParameter(n) || ts.isVariableDeclaration(n) || ts.isBindingElement(n) || ts.isFunctionDeclaration(n) || ts.isCatchClause(n)) {
-      add(ts.isCatchClause(n) ? n.variableDeclaration?.name : n.name);
-    }
-    if (n !== node && isNestedUnit(n)) continue;
-    const children: ts.Node[] = [];
-    ts.forEachChild(n, (c) => {
-      children.push(c);
-    });
-    for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+function reverse(stack: ts.Node[], from: number): void {
+  for (let i = from, j = stack.length - 1; i < j; i++, j--) [stack[i], stack[j]] = [stack[j], stack[i]];
+}
+
+// The name a parameter, variable, binding element, function or catch clause declares.
+function isDeclarationName(id: ts.Node): boolean {
+  const parent = id.parent;
+  if (!parent) return false;
+  switch (parent.kind) {
+    case ts.SyntaxKind.Parameter:
+    case ts.SyntaxKind.VariableDeclaration:
+    case ts.SyntaxKind.BindingElement:
+    case ts.SyntaxKind.FunctionDeclaration:
+      return (parent as ts.NamedDeclaration).name === id;
+    default:
+      return false;
   }
-  return names;
 }
 
 // `order.total` — `total` names a property, not a local, even if a local is also called `total`.
-function isPropertyName(id: ts.Identifier | ts.PrivateIdentifier): boolean {
+function isPropertyName(id: ts.Node): boolean {
   const parent = id.parent;
   return !!parent && ((ts.isPropertyAccessExpression(parent) && parent.name === id) || (ts.isPropertyAssignment(parent) && parent.name === id));
 }
