@@ -35,7 +35,7 @@ console.log(`rxjs@7.8.2 src: ${rx.scan.last.files} files, ${rx.scan.last.functio
 console.log('| task | median time (ms) | peak memory (MB) |');
 console.log('| --- | ---: | ---: |');
 console.log(`| bare parse (typescript ${(await import('typescript')).default.version}, 1 process) | ${f(rx.parse.ms)} | ${f(rx.parse.mb)} |`);
-console.log(`| seamline scan --no-calls (graphs, ev(G), JSON written; ${os.availableParallelism()} threads) | ${f(rx.scan.ms)} | ${f(rx.scan.mb)} |`);
+console.log(`| seamline scan --no-calls (graphs, ev(G), JSON written; ${os.availableParallelism()} cores available) | ${f(rx.scan.ms)} | ${f(rx.scan.mb)} |`);
 console.log(`| ESLint complexity rule alone (1 process) | ${f(rx.eslint.ms)} | ${f(rx.eslint.mb)} |`);
 console.log('');
 const ratios = [

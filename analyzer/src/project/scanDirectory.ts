@@ -2,6 +2,7 @@ import * as path from 'node:path';
 import { computeTotals } from '../metrics/computeTotals';
 import { SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type SkippedFile, type Snapshot } from '../model';
 import { analyseFiles } from './analyseFiles';
+import type { AnalysisThreads } from './AnalysisThreads';
 import { listSourceFiles } from './listSourceFiles';
 import { MAX_LINE_LENGTH } from './classifySource';
 import { analyzerVersion } from './analyzerVersion';
@@ -16,8 +17,10 @@ export interface ScanOptions {
   embedSource?: boolean;
   /** Files with a line longer than this are skipped as minified (default 1,000; 0 turns the check off). */
   maxLineLength?: number;
-  /** Worker threads (default: as many as the code's size pays for, up to one per core). */
+  /** Threads, this one included (default: as many as the code's size pays for, up to one per core). */
   threads?: number;
+  /** Threads the caller started early (see AnalysisThreads); used instead of starting new ones. */
+  startedThreads?: AnalysisThreads;
 }
 
 export interface ScanProgress {
@@ -34,7 +37,13 @@ export interface ScanProgress {
  */
 export async function scanDirectory(dir: string, options: ScanOptions, onProgress?: (p: ScanProgress) => void): Promise<Snapshot> {
   const root = path.resolve(dir);
-  const listed = listSourceFiles(root, options.tsconfig);
+  let listed: ReturnType<typeof listSourceFiles>;
+  try {
+    listed = listSourceFiles(root, options.tsconfig);
+  } catch (err) {
+    options.startedThreads?.close();
+    throw err;
+  }
   onProgress?.({ phase: 'discover', done: listed.files.length, total: listed.files.length });
 
   const functions: FunctionRecord[] = [];
@@ -49,7 +58,7 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
     }
     else skipped.push(result.skipped);
     onProgress?.({ phase: 'analyse', done: ++done, total: listed.files.length, file: result.file });
-  });
+  }, options.startedThreads);
 
   // Completion order depends on the threads; the snapshot must not.
   functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : topLevelFirst(a, b) || a.line - b.line || a.id.localeCompare(b.id)));

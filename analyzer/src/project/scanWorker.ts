@@ -1,8 +1,10 @@
-// Worker-thread entry: measures the files the pool hands it, one at a time.
-import { parentPort, workerData } from 'node:worker_threads';
+// Worker-thread entry: loads the compiler, says so, then measures the files it is handed.
+import { parentPort } from 'node:worker_threads';
 import { analyseFile, type FileJob } from './analyseFile';
 
-const job = workerData as FileJob;
-parentPort!.on('message', (file: string) => {
-  parentPort!.postMessage(analyseFile(job, file));
+let job: FileJob | undefined;
+parentPort!.on('message', (message: { job: FileJob } | { file: string }) => {
+  if ('job' in message) job = message.job;
+  else parentPort!.postMessage({ result: analyseFile(job!, message.file) });
 });
+parentPort!.postMessage({ ready: true });
