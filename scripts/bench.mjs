@@ -11,9 +11,11 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const ROUNDS = Number(process.env.SEAMLINE_BENCH_ROUNDS ?? 5);
 
 function task(script, ...args) {
+  const started = process.hrtime.bigint();
   const r = spawnSync(process.execPath, [path.join(root, 'scripts/bench', script), ...args], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 24 });
+  const wallMs = Number(process.hrtime.bigint() - started) / 1e6;
   if (r.status !== 0) throw new Error(`${script} ${args.join(' ')} failed:\n${r.stderr}`);
-  return JSON.parse(r.stdout.trim().split('\n').pop());
+  return { ...JSON.parse(r.stdout.trim().split('\n').pop()), wallMs };
 }
 
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -21,7 +23,7 @@ const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 function measure(tasks, rounds) {
   const runs = Object.fromEntries(Object.keys(tasks).map((k) => [k, []]));
   for (let i = 0; i < rounds; i++) for (const [name, run] of Object.entries(tasks)) runs[name].push(run());
-  return Object.fromEntries(Object.entries(runs).map(([k, rs]) => [k, { ms: median(rs.map((r) => r.ms)), mb: median(rs.map((r) => r.maxRssKb)) / 1024, last: rs[rs.length - 1] }]));
+  return Object.fromEntries(Object.entries(runs).map(([k, rs]) => [k, { ms: median(rs.map((r) => r.ms)), wall: median(rs.map((r) => r.wallMs)), mb: median(rs.map((r) => r.maxRssKb)) / 1024, last: rs[rs.length - 1] }]));
 }
 
 const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
@@ -32,15 +34,17 @@ const rx = measure({ parse: () => task('parse.cjs'), scan: () => task('scan.cjs'
 const f = (x) => x.toFixed(0);
 const r = (x) => x.toFixed(2);
 console.log(`rxjs@7.8.2 src: ${rx.scan.last.files} files, ${rx.scan.last.functions} functions`);
-console.log('| task | median time (ms) | peak memory (MB) |');
-console.log('| --- | ---: | ---: |');
-console.log(`| bare parse (typescript ${(await import('typescript')).default.version}, 1 process) | ${f(rx.parse.ms)} | ${f(rx.parse.mb)} |`);
-console.log(`| seamline scan --no-calls (graphs, ev(G), JSON written; ${os.availableParallelism()} cores available) | ${f(rx.scan.ms)} | ${f(rx.scan.mb)} |`);
-console.log(`| ESLint complexity rule alone (1 process) | ${f(rx.eslint.ms)} | ${f(rx.eslint.mb)} |`);
+console.log('| task | median time after start-up (ms) | median whole process (ms) | peak memory (MB) |');
+console.log('| --- | ---: | ---: | ---: |');
+console.log(`| bare parse (typescript ${(await import('typescript')).default.version}, 1 process) | ${f(rx.parse.ms)} | ${f(rx.parse.wall)} | ${f(rx.parse.mb)} |`);
+console.log(`| seamline scan --no-calls (graphs, ev(G), JSON written; ${os.availableParallelism()} cores available) | ${f(rx.scan.ms)} | ${f(rx.scan.wall)} | ${f(rx.scan.mb)} |`);
+console.log(`| ESLint complexity rule alone (1 process) | ${f(rx.eslint.ms)} | ${f(rx.eslint.wall)} | ${f(rx.eslint.mb)} |`);
 console.log('');
 const ratios = [
-  ['scan time / parse time', rx.scan.ms / rx.parse.ms, '≤ 1.5', rx.scan.ms / rx.parse.ms <= 1.5],
-  ['ESLint time / scan time', rx.eslint.ms / rx.scan.ms, '≥ 3', rx.eslint.ms / rx.scan.ms >= 3],
+  ['scan time / parse time (after start-up)', rx.scan.ms / rx.parse.ms, '≤ 1.5', rx.scan.ms / rx.parse.ms <= 1.5],
+  ['scan time / parse time (whole process)', rx.scan.wall / rx.parse.wall, '≤ 1.5', rx.scan.wall / rx.parse.wall <= 1.5],
+  ['ESLint time / scan time (after start-up)', rx.eslint.ms / rx.scan.ms, '≥ 3', rx.eslint.ms / rx.scan.ms >= 3],
+  ['ESLint time / scan time (whole process)', rx.eslint.wall / rx.scan.wall, '≥ 3', rx.eslint.wall / rx.scan.wall >= 3],
   ['scan memory / parse memory', rx.scan.mb / rx.parse.mb, '≤ 2', rx.scan.mb / rx.parse.mb <= 2],
 ];
 console.log('| ratio | measured | target | met |');
@@ -49,7 +53,7 @@ for (const [name, value, target, met] of ratios) console.log(`| ${name} | ${r(va
 
 const large = measure({ parse: () => task('parse.cjs', 'large'), scan: () => task('scan.cjs', 'large') }, Math.max(1, Math.min(3, ROUNDS)));
 console.log(`\ntypescript/lib/typescript.js (one file; no ratio asked):`);
-console.log('| task | median time (ms) | peak memory (MB) |');
-console.log('| --- | ---: | ---: |');
-console.log(`| bare parse | ${f(large.parse.ms)} | ${f(large.parse.mb)} |`);
-console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions) | ${f(large.scan.ms)} | ${f(large.scan.mb)} |`);
+console.log('| task | median time after start-up (ms) | median whole process (ms) | peak memory (MB) |');
+console.log('| --- | ---: | ---: | ---: |');
+console.log(`| bare parse | ${f(large.parse.ms)} | ${f(large.parse.wall)} | ${f(large.parse.mb)} |`);
+console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions) | ${f(large.scan.ms)} | ${f(large.scan.wall)} | ${f(large.scan.mb)} |`);

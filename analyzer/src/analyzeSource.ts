@@ -89,7 +89,8 @@ export function analyzeSource(file: string, text: string, settings: CountingSett
       decisions: decisions.total,
       nodes: measured.nodes,
       edges: measured.edges,
-      essential: essentialComplexity(graph).essential,
+      // A graph with at most one decision is always an if or a loop, which reduces (NIST SP 500-235 §10.2).
+      essential: decisions.total <= 1 ? 1 : essentialComplexity(graph).essential,
       fingerprint: fingerprint(unit.node, isNestedUnit),
       unresolvedCalls: 0,
       externalCalls: 0,

@@ -8,16 +8,53 @@
  * are the same code up to renaming of locals — used to follow a function that moved.
  * Nested units (callbacks, inner functions, class members) count as one opaque token each: they
  * have fingerprints of their own, and this keeps the work over a whole file linear.
+ *
+ * The hash is two independent 32-bit FNV-1a lanes (64 bits), fed token by token without
+ * building strings — a fingerprint identifies code, it does not protect anything.
+ * [Reference]: Fowler, Noll, Vo, "FNV hash" (common practice for fast non-cryptographic hashing).
  */
-import { createHash } from 'node:crypto';
 import { ts } from 'ts-morph';
 
-/** 16 hex digits of SHA-1 over the normalised body; `isNestedUnit` marks the units inside it. */
+const PRIME = 16777619;
+
+class Fnv64 {
+  private a = 2166136261;
+  private b = 84696351;
+
+  /** Adds one number (a syntax kind, an operator, a local's index). */
+  int(value: number): void {
+    this.a = Math.imul(this.a ^ (value & 0xffff), PRIME);
+    this.a = Math.imul(this.a ^ (value >>> 16), PRIME);
+    this.b = Math.imul(this.b ^ ((value * 31 + 7) & 0xffff), PRIME);
+    this.b = Math.imul(this.b ^ (value >>> 16), PRIME);
+  }
+
+  /** Adds a text, with its length so that adjacent texts cannot run together. */
+  text(value: string): void {
+    this.int(value.length);
+    for (let i = 0; i < value.length; i++) {
+      const c = value.charCodeAt(i);
+      this.a = Math.imul(this.a ^ c, PRIME);
+      this.b = Math.imul(this.b ^ (c + 0x9e37), PRIME);
+    }
+  }
+
+  hex(): string {
+    return (this.a >>> 0).toString(16).padStart(8, '0') + (this.b >>> 0).toString(16).padStart(8, '0');
+  }
+}
+
+// Marks in the stream, so that a local's index cannot be mistaken for a syntax kind or a name.
+const LOCAL = -1;
+const NAME = -2;
+const LITERAL = -3;
+
+/** 16 hex digits identifying the normalised body; `isNestedUnit` marks the units inside it. */
 export function fingerprint(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean): string {
-  // One walk: tokens go into `parts`; identifiers that might be locals are resolved once the
-  // walk has seen every declaration (a local may be used before its declaration).
-  const parts: string[] = [];
-  const identifiers: number[] = [];
+  // One walk records the token stream; names are resolved afterwards, because a local may be
+  // used before its declaration (a hoisted function, a closure).
+  const kinds: number[] = [];
+  const texts: string[] = [];
   const locals = new Map<string, number>();
   const stack: ts.Node[] = [node];
   while (stack.length > 0) {
@@ -25,43 +62,45 @@ export function fingerprint(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean
     const kind = n.kind;
     if (kind === ts.SyntaxKind.Identifier || kind === ts.SyntaxKind.PrivateIdentifier) {
       const text = (n as ts.Identifier).text;
-      if (isDeclarationName(n)) {
-        if (!locals.has(text)) locals.set(text, locals.size);
-      }
-      if (isPropertyName(n)) parts.push(text);
-      else {
-        identifiers.push(parts.length);
-        parts.push(text);
-      }
+      if (isDeclarationName(n) && !locals.has(text)) locals.set(text, locals.size);
+      kinds.push(isPropertyName(n) ? NAME : LOCAL);
+      texts.push(text);
       continue;
     }
     if (kind >= ts.SyntaxKind.FirstLiteralToken && kind <= ts.SyntaxKind.LastTemplateToken) {
-      parts.push(`${kind}:${(n as ts.LiteralLikeNode).text}`);
+      kinds.push(LITERAL, kind);
+      texts.push((n as ts.LiteralLikeNode).text);
       continue;
     }
-    if (kind === ts.SyntaxKind.BinaryExpression) parts.push(`${kind}:${(n as ts.BinaryExpression).operatorToken.kind}`);
-    else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) {
-      parts.push(`${kind}:${(n as ts.PrefixUnaryExpression).operator}`);
-    } else parts.push(String(kind));
+    kinds.push(kind);
+    if (kind === ts.SyntaxKind.BinaryExpression) kinds.push((n as ts.BinaryExpression).operatorToken.kind);
+    else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) kinds.push((n as ts.PrefixUnaryExpression).operator);
     if (n !== node && isNestedUnit(n)) continue;
     const start = stack.length;
     ts.forEachChild(n, (c) => {
       stack.push(c);
     });
-    reverse(stack, start);
+    for (let i = start, j = stack.length - 1; i < j; i++, j--) [stack[i], stack[j]] = [stack[j], stack[i]];
   }
-  for (const i of identifiers) {
-    const local = locals.get(parts[i]);
-    if (local !== undefined) parts[i] = `$${local}`;
+  const hash = new Fnv64();
+  let t = 0;
+  for (let i = 0; i < kinds.length; i++) {
+    const k = kinds[i];
+    hash.int(k);
+    if (k === LITERAL) {
+      hash.int(kinds[++i]);
+      hash.text(texts[t++]);
+    } else if (k === NAME || k === LOCAL) {
+      const text = texts[t++];
+      const local = k === LOCAL ? locals.get(text) : undefined;
+      if (local !== undefined) hash.int(local);
+      else hash.text(text);
+    }
   }
-  return createHash('sha1').update(parts.join('\u0001')).digest('hex').slice(0, 16);
+  return hash.hex();
 }
 
-function reverse(stack: ts.Node[], from: number): void {
-  for (let i = from, j = stack.length - 1; i < j; i++, j--) [stack[i], stack[j]] = [stack[j], stack[i]];
-}
-
-// The name a parameter, variable, binding element, function or catch clause declares.
+// The name a parameter, variable, binding element or function declares (catch bindings are variables).
 function isDeclarationName(id: ts.Node): boolean {
   const parent = id.parent;
   if (!parent) return false;
