@@ -54,6 +54,8 @@ export interface FunctionRecord {
   unresolvedCalls: number;
   /** Calls into external packages (filled by the call-graph pass; 0 without it). */
   externalCalls: number;
+  /** iv(G), module design complexity: V of the graph reduced to the decisions that control calls (with the call graph). */
+  designComplexity?: number;
   graph: CompactGraph;
   /** The unit's source text, only with `--embed-source`. */
   source?: string;

@@ -1,5 +1,6 @@
 import type { CountingSettings } from './CountingSettings';
 import type { FunctionRecord } from './FunctionRecord';
+import type { CallEdge, ClusterRecord, ExternalPackageCalls, ImportEdge, MapSettings, ModuleEdge, ModuleRecord } from './ModuleMap';
 
 export const SNAPSHOT_SCHEMA = 'seamline/snapshot@1';
 
@@ -25,6 +26,12 @@ export interface SnapshotTotals {
   /** Functions whose reported V(G) is above the limit. */
   overLimit: number;
   loc: number;
+  /** Modularity Q of the file-level clustering (with the call graph). */
+  modularity?: number;
+  /** S0 = Σ iv(G) over all functions (with the call graph). */
+  designComplexity?: number;
+  /** S1 = S0 − n + 1 over all functions (with the call graph). */
+  integrationComplexity?: number;
 }
 
 /** The snapshot file `seamline scan` writes (JSON Schema: docs/snapshot.schema.json). */
@@ -40,4 +47,12 @@ export interface Snapshot {
   totals: SnapshotTotals;
   /** Present when a coverage report was imported: which report format, and files it named that the scan did not find. */
   coverage?: { format: 'lcov' | 'istanbul'; unmatchedFiles: string[] };
+  /** The module map's settings (with the call graph). */
+  mapSettings?: MapSettings;
+  calls?: CallEdge[];
+  imports?: ImportEdge[];
+  externals?: ExternalPackageCalls[];
+  modules?: ModuleRecord[];
+  moduleEdges?: ModuleEdge[];
+  clusters?: ClusterRecord[];
 }

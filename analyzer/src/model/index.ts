@@ -3,3 +3,4 @@ export * from './CountingSettings';
 export * from './FlowGraph';
 export * from './FunctionRecord';
 export * from './Snapshot';
+export * from './ModuleMap';
