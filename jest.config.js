@@ -22,6 +22,8 @@ module.exports = {
     node('analyzer', ['<rootDir>/analyzer']),
     node('api', ['<rootDir>/api'], { setupFiles: ['reflect-metadata'] }),
     '<rootDir>/web/jest.config.js',
+    // The invented demo codebase's own checks (it is scanned, never run).
+    node('fixtures', ['<rootDir>/test/fixtures'], { testMatch: ['**/*.spec.ts'] }),
     node('e2e', ['<rootDir>/test'], {
       testMatch: ['**/*.e2e.ts'],
       setupFiles: ['reflect-metadata'],
