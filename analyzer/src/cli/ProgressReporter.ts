@@ -11,7 +11,7 @@ import { formatCount } from './formatCount';
 
 /** The progress events the scanner reports (mirrors ScanProgress of project/scanDirectory). */
 export interface ProgressEvent {
-  phase: 'discover' | 'analyse';
+  phase: 'discover' | 'analyse' | 'calls';
   done: number;
   total: number;
   file?: string;
@@ -40,6 +40,7 @@ export class ProgressReporter {
   private readonly now: () => number;
   private lastDraw = Number.NEGATIVE_INFINITY;
   private drawn = false;
+  private longScan = false;
 
   constructor(options: ProgressReporterOptions) {
     this.stream = options.stream;
@@ -58,6 +59,12 @@ export class ProgressReporter {
       this.stream.write(`\r${ProgressReporter.barLine(event)}\x1b[K`);
       return;
     }
+    if (event.phase === 'calls') {
+      // Off a terminal, only long scans say what they are doing.
+      if (event.done === 0 && this.longScan) this.stream.write('resolving calls and building the module map…\n');
+      return;
+    }
+    if (event.total > LOG_MIN_FILES) this.longScan = true;
     if (event.phase !== 'analyse' || event.total <= LOG_MIN_FILES) return;
     if (time - this.lastDraw < LOG_INTERVAL_MS) return;
     this.lastDraw = time;
@@ -73,6 +80,7 @@ export class ProgressReporter {
   /** The terminal line for one event. */
   static barLine(event: ProgressEvent): string {
     if (event.phase === 'discover') return `finding files… ${formatCount(event.done)}`;
+    if (event.phase === 'calls') return event.done < event.total ? 'resolving calls and building the module map…' : 'module map ready';
     const ratio = event.total > 0 ? Math.min(1, event.done / event.total) : 0;
     const filled = Math.round(ratio * BAR_WIDTH);
     const bar = `▕${'█'.repeat(filled)}${'░'.repeat(BAR_WIDTH - filled)}▏`;

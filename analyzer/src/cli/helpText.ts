@@ -25,8 +25,10 @@ minified files are skipped with a reason) and write the result to stdout or --ou
 
 Output:
   -f, --format <f>        json (the snapshot, default), sarif (SARIF 2.1.0: one result per
-                          function over the limit) or csv
-  --table functions       the CSV table (modules and clusters arrive with the module map)
+                          function over the limit), csv, or graphml (the module map)
+  --table <t>             the CSV table: functions (default), modules or clusters
+  --level <l>             module level of graphml and the modules/clusters tables:
+                          file, folder (default) or package
   -o, --out <file>        write to a file (atomically) instead of stdout
   --pretty                indent JSON and SARIF output
   --embed-source          put each function's source text in the snapshot
@@ -41,7 +43,9 @@ Input:
   --tsconfig <file>       the tsconfig.json whose file list is scanned (default:
                           <dir>/tsconfig.json when present, else every file under <dir>)
   --coverage <file>       import an lcov or Istanbul JSON coverage report
-  --no-calls              skip the call graph
+  --no-calls              skip the call graph (and so the module map, clusters and gravity)
+  --folder-depth <n>      folder modules are the first n folders of a path (default 2)
+  --resolution <r>        Louvain resolution for clusters (default 1)
   --max-line-length <n>   skip files with a longer line as minified (default 1000; 0: never)
   --threads <n>           analysis threads (default: as many as the code's size pays for,
                           up to one per core)

@@ -72,9 +72,9 @@ describe('runCli: usage errors', () => {
     [['lint'], "seamline: unknown command 'lint': the commands are scan and check\nRun `seamline --help` for usage.\n"],
     [['scan', 'src', '--bogus'], 'seamline scan: unknown option --bogus\nRun `seamline scan --help` for usage.\n'],
     [['scan', 'src', '--out'], 'seamline scan: option --out needs a value\nRun `seamline scan --help` for usage.\n'],
-    [['scan', 'src', '--format', 'yaml'], "seamline scan: --format must be json or sarif or csv, got 'yaml'\nRun `seamline scan --help` for usage.\n"],
+    [['scan', 'src', '--format', 'yaml'], "seamline scan: --format must be json or sarif or csv or graphml, got 'yaml'\nRun `seamline scan --help` for usage.\n"],
     [['scan', 'src', '--limit', 'lots'], "seamline scan: --limit must be a whole number of at least 1, got 'lots'\nRun `seamline scan --help` for usage.\n"],
-    [['scan', 'src', '--format', 'csv', '--table', 'modules'], 'seamline scan: --table modules arrives with the module map; this version writes --table functions\nRun `seamline scan --help` for usage.\n'],
+    [['scan', 'src', '--format', 'csv', '--table', 'modules', '--no-calls'], 'seamline scan: --table modules needs the module map, which --no-calls turns off\nRun `seamline scan --help` for usage.\n'],
     [['check'], 'seamline check: missing snapshot file to check\nRun `seamline check --help` for usage.\n'],
   ])('should exit 2 for %j with one line and a hint, and write nothing on stdout', async (argv, message) => {
     const scanner = fakeScanner();
@@ -94,6 +94,10 @@ describe('runCli scan (with a stand-in scanner)', () => {
           settings: { switch: 'one', optionalChaining: false, defaultValues: false, limit: 15 },
           tsconfig: path.join(dir, 'app/tsconfig.json'),
           embedSource: true,
+          maxLineLength: undefined,
+          threads: undefined,
+          calls: false,
+          mapSettings: {},
         },
       },
     ]);

@@ -11,6 +11,7 @@
 import { parseArgs } from 'node:util';
 import { DEFAULT_SETTINGS } from '../model/CountingSettings';
 import type { CountingSettings } from '../model/CountingSettings';
+import type { MapSettings, ModuleLevel } from '../model/ModuleMap';
 import { UsageError } from './UsageError';
 
 /** What `seamline scan` was asked to do. */
@@ -18,8 +19,12 @@ export interface ScanCommand {
   kind: 'scan';
   dir: string;
   tsconfig?: string;
-  format: 'json' | 'sarif' | 'csv';
-  table: 'functions';
+  format: 'json' | 'sarif' | 'csv' | 'graphml';
+  table: 'functions' | 'modules' | 'clusters';
+  /** The module level of `--format graphml` and `--table modules|clusters` (default folder). */
+  level: ModuleLevel;
+  /** `--folder-depth` and `--resolution`, when given. */
+  mapSettings: Partial<MapSettings>;
   out?: string;
   pretty: boolean;
   embedSource: boolean;
@@ -60,6 +65,9 @@ const SCAN_OPTIONS = {
   'no-calls': { type: 'boolean' },
   'max-line-length': { type: 'string' },
   threads: { type: 'string' },
+  level: { type: 'string' },
+  'folder-depth': { type: 'string' },
+  resolution: { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 } as const;
 
@@ -69,8 +77,6 @@ const CHECK_OPTIONS = {
   help: { type: 'boolean', short: 'h' },
 } as const;
 
-const LATER_FORMATS: Record<string, string> = { graphml: 'the module map' };
-const LATER_TABLES: Record<string, string> = { modules: 'the module map', clusters: 'the module map' };
 
 function wantsHelp(args: readonly string[]): boolean {
   const end = args.indexOf('--');
@@ -127,24 +133,29 @@ function onePositional(positionals: string[], what: string, command: 'scan' | 'c
 function parseScan(args: string[]): ScanCommand {
   const { values, positionals } = parse(args, SCAN_OPTIONS, 'scan');
   const dir = onePositional(positionals, 'folder to scan', 'scan');
-  const formatValue = values.format ?? 'json';
-  if (LATER_FORMATS[formatValue]) {
-    throw new UsageError(`--format ${formatValue} arrives with ${LATER_FORMATS[formatValue]}; this version writes json, sarif or csv`, 'scan');
-  }
-  const format = oneOf(formatValue, ['json', 'sarif', 'csv'] as const, '--format', 'scan');
-  const tableValue = values.table ?? 'functions';
-  if (LATER_TABLES[tableValue]) {
-    throw new UsageError(`--table ${tableValue} arrives with ${LATER_TABLES[tableValue]}; this version writes --table functions`, 'scan');
-  }
-  const table = oneOf(tableValue, ['functions'] as const, '--table', 'scan');
+  const format = oneOf(values.format ?? 'json', ['json', 'sarif', 'csv', 'graphml'] as const, '--format', 'scan');
+  const table = oneOf(values.table ?? 'functions', ['functions', 'modules', 'clusters'] as const, '--table', 'scan');
+  const level = oneOf(values.level ?? 'folder', ['file', 'folder', 'package'] as const, '--level', 'scan');
   if (values.table !== undefined && format !== 'csv') throw new UsageError('--table applies only to --format csv', 'scan');
-  if (values.pretty && format === 'csv') throw new UsageError('--pretty applies only to --format json or sarif', 'scan');
+  if (values.pretty && (format === 'csv' || format === 'graphml')) throw new UsageError('--pretty applies only to --format json or sarif', 'scan');
+  const needsMap = format === 'graphml' || table !== 'functions';
+  if (needsMap && values['no-calls']) throw new UsageError(`${format === 'graphml' ? '--format graphml' : `--table ${table}`} needs the module map, which --no-calls turns off`, 'scan');
+  if (values.level !== undefined && !needsMap) throw new UsageError('--level applies only to --format graphml and --table modules|clusters', 'scan');
+  const mapSettings: Partial<MapSettings> = {};
+  if (values['folder-depth'] !== undefined) mapSettings.folderDepth = parseCount(values['folder-depth'], '--folder-depth', 1);
+  if (values.resolution !== undefined) {
+    const r = /^\d+(\.\d+)?$/.test(values.resolution) ? Number(values.resolution) : NaN;
+    if (!(r > 0)) throw new UsageError(`--resolution must be a number above 0, got '${values.resolution}'`, 'scan');
+    mapSettings.resolution = r;
+  }
   return {
     kind: 'scan',
     dir,
     tsconfig: values.tsconfig,
     format,
     table,
+    level,
+    mapSettings,
     out: values.out,
     pretty: values.pretty ?? false,
     embedSource: values['embed-source'] ?? false,

@@ -9,7 +9,10 @@
 import { promises as fsp } from 'node:fs';
 import path from 'node:path';
 import type { Writable } from 'node:stream';
+import { clustersCsv } from '../formats/clustersCsv';
 import { functionsCsv } from '../formats/functionsCsv';
+import { toGraphml } from '../formats/graphml';
+import { modulesCsv } from '../formats/modulesCsv';
 import { toSarif } from '../formats/toSarif';
 import type { Snapshot } from '../model/Snapshot';
 import { snapshotJsonChunks } from '../snapshot/snapshotJsonChunks';
@@ -30,9 +33,13 @@ export interface CommandIo {
 }
 
 /** The machine output of a scan, as chunks. */
-export function* scanOutputChunks(snapshot: Snapshot, command: Pick<ScanCommand, 'format' | 'pretty'>): Generator<string> {
+export function* scanOutputChunks(snapshot: Snapshot, command: Pick<ScanCommand, 'format' | 'pretty' | 'table' | 'level'>): Generator<string> {
   if (command.format === 'csv') {
-    yield* functionsCsv(snapshot);
+    if (command.table === 'modules') yield* modulesCsv(snapshot, command.level);
+    else if (command.table === 'clusters') yield* clustersCsv(snapshot, command.level);
+    else yield* functionsCsv(snapshot);
+  } else if (command.format === 'graphml') {
+    yield toGraphml(snapshot, command.level);
   } else if (command.format === 'sarif') {
     yield `${JSON.stringify(toSarif(snapshot), null, command.pretty ? 2 : undefined)}\n`;
   } else {
@@ -65,6 +72,8 @@ export async function runScan(command: ScanCommand, io: CommandIo, deps: CliDepe
         embedSource: command.embedSource,
         maxLineLength: command.maxLineLength,
         threads: command.threads,
+        calls: command.calls,
+        mapSettings: command.mapSettings,
       },
       (event) => progress.update(event),
     );

@@ -1,13 +1,13 @@
 /**
- * Every metric Seamline reports per function, with the snapshot fields it fills and the page
- * in docs/metrics/ that defines it with a worked example. A test checks that each metric has
- * its page and that every numeric field of a function record belongs to a metric.
+ * Every metric Seamline reports, per function or per module, with the snapshot fields it fills
+ * and the page in docs/metrics/ that defines it with a worked example. A test checks that each
+ * metric has its page and that every numeric field of a function record belongs to a metric.
  */
 export interface MetricEntry {
   /** Also the name of its page: docs/metrics/<id>.md. */
   id: string;
   title: string;
-  /** Fields of FunctionRecord (or of FunctionRecord.coverage, prefixed `coverage.`) it fills. */
+  /** Fields of FunctionRecord (or of its coverage, prefixed `coverage.`) or of ModuleRecord it fills. */
   fields: string[];
 }
 
@@ -19,4 +19,10 @@ export const METRIC_CATALOG: readonly MetricEntry[] = [
   { id: 'loc', title: 'Lines of code', fields: ['loc'] },
   { id: 'coverage', title: 'Covered outcomes, actual complexity AC and untested paths', fields: ['coverage.outcomesCovered', 'coverage.outcomesTotal', 'coverage.actualComplexity', 'coverage.untestedPaths'] },
   { id: 'crap', title: 'CRAP', fields: ['coverage.crap'] },
+  { id: 'modules', title: 'Module map: modules, coupling and instability', fields: [] },
+  { id: 'design', title: 'Design complexity iv(G), S0 and S1', fields: ['designComplexity'] },
+  { id: 'carve', title: 'Carve plan: cut, chatter, cohesion and S1 of a split', fields: [] },
+  { id: 'shift', title: 'Shift: what changed between two snapshots', fields: [] },
+  { id: 'clusters', title: 'Clusters and modularity Q', fields: [] },
+  { id: 'gravity', title: 'Gravity', fields: ['gravity', 'gravityRank'] },
 ];

@@ -25,7 +25,7 @@ describe('scanDirectory', () => {
       'node_modules/dep/index.js': 'module.exports = 1;\n',
     });
     const progress: ScanProgress[] = [];
-    const snapshot = await scanDirectory(root, { settings: DEFAULT_SETTINGS }, (p) => progress.push(p));
+    const snapshot = await scanDirectory(root, { settings: DEFAULT_SETTINGS, calls: false }, (p) => progress.push(p));
 
     expect(snapshot.files.scanned).toBe(1);
     expect(snapshot.files.skipped.map((s) => [s.file, s.reason])).toEqual([
@@ -57,5 +57,33 @@ describe('scanDirectory', () => {
     const root = tree({ 'evil.js': `require('fs').writeFileSync(${JSON.stringify(marker)}, 'ran');\n` });
     await scanDirectory(root, { settings: DEFAULT_SETTINGS });
     expect(fs.existsSync(marker)).toBe(false);
+  });
+});
+
+describe('scanDirectory with the module map', () => {
+  it('should resolve calls, build modules at each level, cluster them and rank gravity', async () => {
+    const root = tree({
+      'src/core/dispatch.ts': 'import { price } from "../pricing/price";\nexport function dispatch(o: { kg: number }) { return o.kg > 5 ? price(o.kg) : 0; }\n',
+      'src/pricing/price.ts': 'export function price(kg: number) { return kg * 2; }\n',
+      'src/orders/take.ts': 'import { dispatch } from "../core/dispatch";\nexport function take() { return dispatch({ kg: 3 }); }\n',
+    });
+    const progress: ScanProgress[] = [];
+    const snapshot = await scanDirectory(root, { settings: DEFAULT_SETTINGS }, (p) => progress.push(p));
+    const id = (name: string) => snapshot.functions.find((f) => f.name === name)!.id;
+    expect(snapshot.calls).toEqual(expect.arrayContaining([
+      { from: id('dispatch'), to: id('price'), count: 1, kind: 'call', certain: true },
+      { from: id('take'), to: id('dispatch'), count: 1, kind: 'call', certain: true },
+    ]));
+    expect(snapshot.imports).toEqual(expect.arrayContaining([{ from: 'src/core/dispatch.ts', to: 'src/pricing/price.ts' }]));
+    expect(new Set(snapshot.modules!.map((m) => m.level))).toEqual(new Set(['file', 'folder']));
+    const core = snapshot.modules!.find((m) => m.id === 'folder:src/core')!;
+    expect(core).toMatchObject({ functions: 2, fanIn: 1, fanOut: 1, ca: 1, ce: 1, instability: 0.5 });
+    expect(core.cluster).not.toBeNull();
+    // iv(G) of dispatch: its one decision guards the call to price (NIST SP 500-235 §7.4).
+    expect(snapshot.functions.find((f) => f.name === 'dispatch')!.designComplexity).toBe(2);
+    expect(snapshot.totals.designComplexity).toBe(snapshot.functions.reduce((s, f) => s + f.designComplexity!, 0));
+    expect(snapshot.totals.integrationComplexity).toBe(snapshot.totals.designComplexity! - snapshot.functions.length + 1);
+    expect(progress.filter((p) => p.phase === 'calls').map((p) => p.done)).toEqual([0, 1]);
+    expect(snapshotSchemaProblems(snapshot)).toEqual([]);
   });
 });

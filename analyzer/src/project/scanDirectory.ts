@@ -1,6 +1,7 @@
 import * as path from 'node:path';
 import { computeTotals } from '../metrics/computeTotals';
-import { SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type SkippedFile, type Snapshot } from '../model';
+import { DEFAULT_MAP_SETTINGS, SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type MapSettings, type SkippedFile, type Snapshot } from '../model';
+import { mapInThread } from './mapInThread';
 import { analyseFiles } from './analyseFiles';
 import type { AnalysisThreads } from './AnalysisThreads';
 import { listSourceFiles } from './listSourceFiles';
@@ -21,10 +22,15 @@ export interface ScanOptions {
   threads?: number;
   /** Threads the caller started early (see AnalysisThreads); used instead of starting new ones. */
   startedThreads?: AnalysisThreads;
+  /** Resolve calls and build the module map, clusters and gravity (default true; `--no-calls` turns it off). */
+  calls?: boolean;
+  /** Folder depth, Louvain resolution and seed of the module map. */
+  mapSettings?: Partial<MapSettings>;
 }
 
 export interface ScanProgress {
-  phase: 'discover' | 'analyse';
+  /** `calls`: the call graph and module map, one step for the whole codebase (done 0 of 1, then 1 of 1). */
+  phase: 'discover' | 'analyse' | 'calls';
   done: number;
   total: number;
   file?: string;
@@ -62,19 +68,43 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
 
   // Completion order depends on the threads; the snapshot must not.
   functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : topLevelFirst(a, b) || a.line - b.line || a.id.localeCompare(b.id)));
-  skipped.sort((a, b) => a.file.localeCompare(b.file));
   const listedFiles = new Set(listed.files);
-  const analysedFiles = listed.files.length - skipped.filter((s) => listedFiles.has(s.file)).length;
-  return {
+  const failedFiles = new Set(skipped.filter((s) => listedFiles.has(s.file)).map((s) => s.file));
+  const analysedFiles = listed.files.filter((f) => !failedFiles.has(f));
+  const snapshot: Snapshot = {
     schema: SNAPSHOT_SCHEMA,
     generator: { name: 'seamline', version: analyzerVersion() },
     createdAt: new Date().toISOString(),
     root: path.basename(root),
     settings: { ...options.settings },
-    files: { scanned: analysedFiles, skipped },
+    files: { scanned: analysedFiles.length, skipped },
     functions,
-    totals: computeTotals(functions, { files: analysedFiles, loc }, options.settings.limit),
+    totals: computeTotals(functions, { files: analysedFiles.length, loc }, options.settings.limit),
   };
+  if (options.calls !== false && functions.length > 0) {
+    onProgress?.({ phase: 'calls', done: 0, total: 1 });
+    const mapSettings = { ...DEFAULT_MAP_SETTINGS, ...options.mapSettings };
+    const tsconfig = listed.tsconfig === undefined ? undefined : path.join(root, listed.tsconfig);
+    const map = await mapInThread({ root, files: analysedFiles, tsconfig, settings: options.settings, mapSettings }, functions);
+    const s0 = map.functions.reduce((sum, f) => sum + (f.designComplexity ?? 1), 0);
+    Object.assign(snapshot, {
+      functions: map.functions,
+      mapSettings: map.mapSettings,
+      calls: map.calls,
+      imports: map.imports,
+      externals: map.externals,
+      modules: map.modules,
+      moduleEdges: map.moduleEdges,
+      clusters: map.clusters,
+    });
+    snapshot.totals = { ...snapshot.totals, modularity: map.modularity, designComplexity: s0, integrationComplexity: s0 - map.functions.length + 1 };
+    for (const failed of map.failedFiles) {
+      skipped.push({ file: failed.file, reason: 'analysis-failed', detail: `its calls could not be resolved: ${failed.detail}` });
+    }
+    onProgress?.({ phase: 'calls', done: 1, total: 1 });
+  }
+  skipped.sort((a, b) => a.file.localeCompare(b.file));
+  return snapshot;
 }
 
 function topLevelFirst(a: FunctionRecord, b: FunctionRecord): number {

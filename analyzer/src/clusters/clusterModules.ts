@@ -1,0 +1,117 @@
+/**
+ * Clusters of modules
+ * ===================
+ * Groups one level's modules into candidate service boundaries with Louvain community
+ * detection on the weighted, undirected module graph: module edges a→b and b→a become one
+ * undirected edge whose weight is their sum; self-loops and zero weights are left out. Louvain
+ * runs with the map's resolution and a random order seeded from the map's seed, and modules are
+ * added in id order, so the same modules and edges always give the same clusters. A module with
+ * no edges stays alone: it is a cluster of one. Clusters are numbered c1, c2, … by descending
+ * ΣV, ties by the first member's path. Q is computed by our own modularity() on the same graph.
+ *
+ * [Reference]: V. D. Blondel, J.-L. Guillaume, R. Lambiotte, E. Lefebvre, "Fast unfolding of
+ * communities in large networks", J. Stat. Mech. (2008) P10008 (graphology-communities-louvain).
+ */
+import { UndirectedGraph } from 'graphology';
+import louvain from 'graphology-communities-louvain';
+import seedrandom from 'seedrandom';
+import type { ClusterRecord, MapSettings, ModuleEdge, ModuleLevel, ModuleRecord } from '../model';
+import { ClusterInputError } from './ClusterInputError';
+import { mergeModuleEdges } from './mergeModuleEdges';
+import { modularity, type WeightedPair } from './modularity';
+
+/** What clustering one level gives: the clusters, each module's cluster id and the partition's Q. */
+export interface ClusteredLevel {
+  clusters: ClusterRecord[];
+  assignment: Map<string, string>;
+  modularity: number;
+}
+
+/** Louvain clusters of `level`'s modules (see the file header). */
+export function clusterModules(modules: ModuleRecord[], edges: ModuleEdge[], level: ModuleLevel, settings: MapSettings): ClusteredLevel {
+  const own = sortedById(modules.filter((m) => m.level === level));
+  const ids = own.map((m) => m.id);
+  const merged = mergeModuleEdges(ids, edges, level);
+
+  const graph = new UndirectedGraph<Record<string, never>, { weight: number }>();
+  for (const id of ids) graph.addNode(id);
+  // NOTE: our own edge keys spare graphology generating (and checking) a random key per edge.
+  for (let k = 0; k < merged.size; k++) graph.addEdgeWithKey(String(k), ids[merged.lo[k]], ids[merged.hi[k]], { weight: merged.weight[k] });
+
+  // Louvain on a graph without edges has nothing to move: every module keeps its own community.
+  const found = graph.size === 0 ? null : louvain(graph, { resolution: settings.resolution, rng: seedrandom(settings.seed), getEdgeWeight: 'weight' });
+  const community = new Int32Array(own.length);
+  const communityIds = new Map<number, number>();
+  for (let i = 0; i < own.length; i++) {
+    const raw = found === null ? i : found[ids[i]];
+    let c = communityIds.get(raw);
+    if (c === undefined) communityIds.set(raw, (c = communityIds.size));
+    community[i] = c;
+  }
+
+  const clusters = describeClusters(own, community, communityIds.size, merged, level);
+  const assignment = new Map<string, string>();
+  for (const c of clusters) for (const member of c.members) assignment.set(member, c.id);
+
+  const pairs = function* (): Generator<WeightedPair> {
+    for (let k = 0; k < merged.size; k++) yield { from: ids[merged.lo[k]], to: ids[merged.hi[k]], weight: merged.weight[k] };
+  };
+  return { clusters, assignment, modularity: modularity(pairs(), assignment, settings.resolution) };
+}
+
+function sortedById(modules: ModuleRecord[]): ModuleRecord[] {
+  let sorted = true;
+  for (let i = 1; i < modules.length && sorted; i++) sorted = modules[i - 1].id < modules[i].id;
+  // Snapshots list modules in id order already; sort only when they are not.
+  const result = sorted ? modules : [...modules].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  for (let i = 1; i < result.length; i++) if (result[i - 1].id === result[i].id) throw new ClusterInputError(`module ${result[i].id} is listed twice`);
+  return result;
+}
+
+interface Tally {
+  members: number[];
+  functions: number;
+  cyclomatic: number;
+  decisions: number;
+  internalWeight: number;
+  externalWeight: number;
+  firstPath: string;
+}
+
+function describeClusters(own: ModuleRecord[], community: Int32Array, count: number, merged: ReturnType<typeof mergeModuleEdges>, level: ModuleLevel): ClusterRecord[] {
+  const tallies: Tally[] = Array.from({ length: count }, () => ({ members: [], functions: 0, cyclomatic: 0, decisions: 0, internalWeight: 0, externalWeight: 0, firstPath: '' }));
+  for (let i = 0; i < own.length; i++) {
+    const t = tallies[community[i]];
+    const m = own[i];
+    if (t.members.length === 0 || m.path < t.firstPath) t.firstPath = m.path;
+    t.members.push(i);
+    t.functions += m.functions;
+    t.cyclomatic += m.cyclomatic;
+    t.decisions += m.decisions;
+  }
+  for (let k = 0; k < merged.size; k++) {
+    const a = community[merged.lo[k]];
+    const b = community[merged.hi[k]];
+    const w = merged.weight[k];
+    if (a === b) tallies[a].internalWeight += w;
+    else {
+      tallies[a].externalWeight += w;
+      tallies[b].externalWeight += w;
+    }
+  }
+  const order = tallies.map((_, c) => c).sort((x, y) => tallies[y].cyclomatic - tallies[x].cyclomatic || (tallies[x].firstPath < tallies[y].firstPath ? -1 : tallies[x].firstPath > tallies[y].firstPath ? 1 : 0));
+  return order.map((c, rank) => {
+    const t = tallies[c];
+    return {
+      id: `c${rank + 1}`,
+      level,
+      // Members were pushed in id order.
+      members: t.members.map((i) => own[i].id),
+      functions: t.functions,
+      cyclomatic: t.cyclomatic,
+      decisions: t.decisions,
+      internalWeight: t.internalWeight,
+      externalWeight: t.externalWeight,
+    };
+  });
+}

@@ -1,0 +1,34 @@
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import { Worker } from 'node:worker_threads';
+import type { FunctionRecord } from '../model';
+import { mapCodebase, type MapInput } from './mapCodebase';
+
+/** Stack for the module-map thread: the checker overflows Node's default on very large files (stack.md). */
+const MAP_STACK_MB = 256;
+
+/**
+ * Runs `mapCodebase` on a thread of its own with a large stack when the analyzer runs compiled
+ * (the CLI, the server's workers), and in this thread otherwise (tests from sources).
+ */
+export function mapInThread(input: MapInput, functions: FunctionRecord[]): Promise<ReturnType<typeof mapCodebase>> {
+  const script = path.join(__dirname, 'mapWorker.js');
+  if (!fs.existsSync(script)) return Promise.resolve(mapCodebase(input, functions));
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(script, { workerData: { input, functions }, resourceLimits: { stackSizeMb: MAP_STACK_MB } });
+    let settled = false;
+    worker.once('message', (message: { result?: ReturnType<typeof mapCodebase>; error?: string }) => {
+      settled = true;
+      if (message.result) resolve(message.result);
+      else reject(new Error(`analyzer/map: the module map failed: ${message.error}`));
+      void worker.terminate();
+    });
+    worker.once('error', (err) => {
+      settled = true;
+      reject(new Error(`analyzer/map: the module map thread failed: ${err.message}`));
+    });
+    worker.once('exit', (code) => {
+      if (!settled) reject(new Error(`analyzer/map: the module map thread stopped (exit ${code})`));
+    });
+  });
+}
