@@ -6,6 +6,8 @@
  * duplicates, per-function counts of unresolved and external calls with every call site, and
  * external calls per package. Dispatch through interfaces and abstract members is held back
  * until every class is known, then becomes one uncertain edge per implementation.
+ *
+ * [Reference]: the model's CallEdge / ImportEdge / ExternalPackageCalls (model/ModuleMap.ts).
  */
 import type { CallEdge, CallKind, ExternalPackageCalls, ImportEdge } from '../model';
 import type { CallResolver, CallTarget } from './CallResolver';

@@ -14,6 +14,9 @@
  * Edge cases: a callee of type `any` has no declaration and is unresolved, as is a call through
  * a function-typed value declared in the scanned code (a callback parameter: its target is not
  * known statically); ambient `declare` code in a scanned file is external, grouped by its file.
+ *
+ * [Reference]: TypeScript compiler API, `TypeChecker.getResolvedSignature`, `getSymbolAtLocation`,
+ * `getAliasedSymbol` (common practice).
  */
 import { ts } from 'ts-morph';
 import { DispatchIndex, resolveAlias } from './DispatchIndex';
@@ -38,6 +41,7 @@ const INTERNAL: CallTarget = { kind: 'internal' };
 
 export class CallResolver {
   private readonly bySymbol = new Map<ts.Symbol, IndexedUnit | null>();
+  private readonly functionBySymbol = new Map<ts.Symbol, IndexedUnit | null>();
   private readonly groups = new Map<ts.SourceFile, string | null>();
 
   constructor(
@@ -62,7 +66,7 @@ export class CallResolver {
     // A callee of type `any` leads nowhere (the bulk of unresolved calls in JavaScript).
     if (!declaration && ts.isCallExpression(node) && this.checker.getTypeAtLocation(node.expression).flags & ts.TypeFlags.Any) return UNRESOLVED;
     const symbol = this.calleeSymbol(node);
-    const unit = symbol && this.unitOfSymbol(symbol);
+    const unit = symbol && this.unitOfSymbol(symbol, true);
     if (unit) return { kind: 'units', ids: [unit.id] };
     if (group === STANDARD_LIBRARY) {
       const called = this.callOrApply(node);
@@ -89,7 +93,7 @@ export class CallResolver {
       ts.isShorthandPropertyAssignment(node.parent) && node.parent.name === node
         ? this.checker.getShorthandAssignmentValueSymbol(node.parent)
         : this.checker.getSymbolAtLocation(name);
-    const unit = symbol && this.unitOfSymbol(symbol);
+    const unit = symbol && this.unitOfSymbol(symbol, false);
     // Reading a getter runs it (a call, found elsewhere); it hands no function on.
     return unit && unit.kind !== 'getter' && unit.kind !== 'setter' ? unit : undefined;
   }
@@ -148,16 +152,18 @@ export class CallResolver {
     return base && this.checker.getSymbolAtLocation(base.expression);
   }
 
-  private unitOfSymbol(symbol: ts.Symbol): IndexedUnit | undefined {
-    const cached = this.bySymbol.get(symbol);
+  /** The unit a symbol stands for; a class stands for its constructor only when it is called (`new`). */
+  private unitOfSymbol(symbol: ts.Symbol, called: boolean): IndexedUnit | undefined {
+    const cache = called ? this.bySymbol : this.functionBySymbol;
+    const cached = cache.get(symbol);
     if (cached !== undefined) return cached ?? undefined;
     const target = resolveAlias(symbol, this.checker);
     let found: IndexedUnit | undefined;
     for (const declaration of target?.declarations ?? []) {
-      found = this.units.unitOfDeclaration(declaration) ?? this.units.constructorOf(declaration);
+      found = this.units.unitOfDeclaration(declaration) ?? (called ? this.units.constructorOf(declaration) : undefined);
       if (found) break;
     }
-    this.bySymbol.set(symbol, found ?? null);
+    cache.set(symbol, found ?? null);
     return found;
   }
 

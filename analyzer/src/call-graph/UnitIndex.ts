@@ -6,6 +6,8 @@
  * declaration the checker points at to the unit it IS: the function itself, the function or
  * arrow a variable, property or `a.b = …` assignment holds, the implementation behind overload
  * signatures, or a class's constructor.
+ *
+ * [Reference]: analyzeSource.ts (ids), units/findUnits.ts (units).
  */
 import { ts } from 'ts-morph';
 import { countDecisions } from '../decisions/countDecisions';
@@ -46,7 +48,12 @@ export class UnitIndex {
       const unit: IndexedUnit = { id: unitId(file, u.stableName, ordinal), kind: u.kind, name: u.name };
       this.units.set(u.node, unit);
       if (u.kind === 'getter' || u.kind === 'setter') this.accessorNames.add(u.name);
-      else if (CALLABLE.has(u.kind)) this.referableNames.add(u.name.slice(u.name.lastIndexOf('.') + 1));
+      else if (CALLABLE.has(u.kind)) {
+        this.referableNames.add(u.name.slice(u.name.lastIndexOf('.') + 1));
+        // `const f = function g() {}` is referred to as f.
+        const holder = holderName(u.node);
+        if (holder) this.referableNames.add(holder);
+      }
       return { node: u.node, unit };
     });
     this.addImportedNames(sourceFile);
@@ -95,6 +102,17 @@ export class UnitIndex {
     }
     return undefined;
   }
+}
+
+/** The name of the variable, property or assignment target holding a function expression. */
+function holderName(node: ts.Node): string | undefined {
+  if (!ts.isFunctionExpression(node) || !node.name) return undefined;
+  let parent = node.parent;
+  while (ts.isParenthesizedExpression(parent) || ts.isAsExpression(parent) || ts.isSatisfiesExpression(parent)) parent = parent.parent;
+  let target: ts.Node | undefined;
+  if (ts.isVariableDeclaration(parent) || ts.isPropertyAssignment(parent) || ts.isPropertyDeclaration(parent)) target = parent.name;
+  else if (ts.isBinaryExpression(parent) && parent.operatorToken.kind === ts.SyntaxKind.EqualsToken) target = ts.isPropertyAccessExpression(parent.left) ? parent.left.name : parent.left;
+  return target && ts.isIdentifier(target) ? target.text : undefined;
 }
 
 /** The function expression a declaration holds: `const f = () => …`, `{ f: function () {} }`, `a.b = …`. */

@@ -15,6 +15,8 @@
  * (`<div>`) run nothing; a function written inline as an argument is a unit of its own, not a
  * reference; only getters and setters declared in the scanned code are looked for, and only
  * through `obj.name` (not destructuring).
+ *
+ * [Reference]: unit boundaries as in cfg/unitBoundaries.ts; TypeScript's syntax kinds (common practice).
  */
 import { ts } from 'ts-morph';
 import { isTypeOrAmbient } from '../cfg/unitBoundaries';
