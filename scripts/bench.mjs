@@ -57,3 +57,31 @@ console.log('| task | median time after start-up (ms) | median whole process (ms
 console.log('| --- | ---: | ---: | ---: |');
 console.log(`| bare parse | ${f(large.parse.ms)} | ${f(large.parse.wall)} | ${f(large.parse.mb)} |`);
 console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions) | ${f(large.scan.ms)} | ${f(large.scan.wall)} | ${f(large.scan.mb)} |`);
+
+// Issue 4: the call graph against its floor, on rxjs and on the JavaScript typeorm ships.
+const callRounds = Math.max(1, Math.min(5, ROUNDS));
+console.log('\nCall graph against creating the program and checker and resolving every call signature (same files, same options):');
+console.log('| corpus | floor (ms) | call graph (ms) | ratio | target | met | call graph peak memory (MB) |');
+console.log('| --- | ---: | ---: | ---: | ---: | --- | ---: |');
+for (const [corpus, rounds] of [['rxjs', callRounds], ['typeorm', Math.max(1, Math.min(3, ROUNDS))]]) {
+  const m = measure({ checker: () => task('calls.cjs', corpus, 'checker'), calls: () => task('calls.cjs', corpus, 'calls') }, rounds);
+  const ratio = m.calls.ms / m.checker.ms;
+  console.log(`| ${corpus} (${m.calls.last.files} files, ${m.calls.last.edges} edges) | ${f(m.checker.ms)} | ${f(m.calls.ms)} | ${r(ratio)} | ≤ 1.3 | ${ratio <= 1.3 ? 'yes' : 'no'} | ${f(m.calls.mb)} |`);
+}
+
+// Issue 4: Louvain plus gravity on a generated 100,000-module graph, and carve-plan evaluation.
+function lastJson(script, ...args) {
+  const run = spawnSync(process.execPath, [path.join(root, 'scripts/bench', script), ...args], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 26 });
+  if (run.status !== 0) throw new Error(`${script} failed:\n${run.stderr}`);
+  return JSON.parse(run.stdout.trim().split('\n').pop());
+}
+const lv = lastJson('louvain.cjs', '100000', '3');
+console.log(`\nClusters and gravity on a generated ${lv.modules.toLocaleString('en')}-module graph (average degree ${lv.averageDegree.toFixed(1)}, weighted), medians of ${lv.rounds}:`);
+console.log('| task | ms |');
+console.log('| --- | ---: |');
+console.log(`| graphology: building the graph | ${f(lv.buildMs)} |`);
+console.log(`| graphology: Louvain alone (the baseline) | ${f(lv.louvainMs)} |`);
+console.log(`| Seamline: clusterModules + rankGravity (merging edges and building the graph included) | ${f(lv.oursMs)} |`);
+console.log(`ratio to Louvain alone ${r(lv.ratio)}, to build + Louvain ${r(lv.ratioWithBuild)}; recorded target under 3,000 ms: ${lv.oursMs < 3000 ? 'met' : 'not met'}; peak ${f(lv.maxRssKb / 1024)} MB`);
+const cv = lastJson('carve.cjs');
+console.log(`\nCarve-plan evaluation on 5,000 modules: prepare ${f(cv.prepareMs)} ms once; evaluate median ${f(cv.ms)} ms over ${cv.edits} edits (first ${f(cv.coldEvaluateMs)} ms); target under 100 ms: ${cv.under100ms ? 'met' : 'not met'}`);

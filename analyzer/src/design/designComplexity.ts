@@ -77,9 +77,12 @@ class DesignReducer {
   }
 
   reduce(): void {
-    // Collapsing a region keeps the post-dominators of the blocks left (paths keep their
-    // surviving blocks), so one computation serves a whole round; a round that collapses
-    // nothing ends the reduction.
+    // A collapse usually keeps the post-dominators of the blocks left, so one computation
+    // serves a whole round. Not when the region loops back to h and is also entered from
+    // elsewhere (a jump into a loop body): that entry now goes straight to t, so the blocks
+    // above it may no longer pass h, and an ipdom of h read later in the round could name a
+    // block that no longer post-dominates (its "region" would run past the exit). Such a
+    // collapse ends the round. A round that collapses nothing ends the reduction.
     for (let changed = true; changed; ) {
       changed = false;
       const ipdom = immediatePostDominators(this.e, this.live, this.exit);
@@ -89,8 +92,8 @@ class DesignReducer {
         if (this.e.outCount[h] === 1 && this.e.to[this.e.outHead[h]] === t) continue;
         const region = this.callFreeRegion(h, t);
         if (!region) continue;
-        this.collapse(h, t, region);
         changed = true;
+        if (!this.collapse(h, t, region)) break;
       }
       if (changed) this.dropDeadBlocks();
     }
@@ -126,15 +129,23 @@ class DesignReducer {
     return region;
   }
 
-  /** Replaces h's out-edges by one edge to t and removes the region (marked with the current stamp). */
-  private collapse(h: number, t: number, region: number[]): void {
+  /**
+   * Replaces h's out-edges by one edge to t and removes the region (marked with the current
+   * stamp). Returns false when the post-dominators of the blocks left may have changed: the
+   * region passes through h and an edge from outside it was pointed at t, bypassing h.
+   */
+  private collapse(h: number, t: number, region: number[]): boolean {
     const stamp = this.stamp;
+    let bypassed = false;
     for (const s of region) {
       if (s === h) continue;
       for (let i = this.e.inHead[s]; i >= 0; ) {
         const next = this.e.inNext[i];
         const p = this.e.from[i];
-        if (p !== h && this.mark[p] !== stamp) this.e.retarget(i, t);
+        if (p !== h && this.mark[p] !== stamp) {
+          this.e.retarget(i, t);
+          bypassed = true;
+        }
         i = next;
       }
     }
@@ -146,6 +157,7 @@ class DesignReducer {
     const keep = this.e.outHead[h];
     while (this.e.outNext[keep] >= 0) this.e.remove(this.e.outNext[keep]);
     if (this.e.to[keep] !== t) this.e.retarget(keep, t);
+    return !(bypassed && this.mark[h] === stamp);
   }
 
   /** Live blocks in post-order from the entry: inner structures come before the ones around them. */

@@ -1,17 +1,9 @@
 import * as fs from 'node:fs';
-import * as os from 'node:os';
 import * as path from 'node:path';
+import { tempTree as tree } from '../testing/tempTree';
 import { listSourceFiles } from './listSourceFiles';
 import { ScanInputError } from './ScanInputError';
 
-function tree(files: Record<string, string>): string {
-  const root = fs.mkdtempSync(path.join(os.tmpdir(), 'seamline-list-'));
-  for (const [file, text] of Object.entries(files)) {
-    fs.mkdirSync(path.dirname(path.join(root, file)), { recursive: true });
-    fs.writeFileSync(path.join(root, file), text);
-  }
-  return root;
-}
 
 describe('listSourceFiles', () => {
   it('should walk the folder when there is no tsconfig, skipping declarations and node_modules with a reason', () => {

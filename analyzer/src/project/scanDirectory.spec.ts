@@ -3,16 +3,9 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import { DEFAULT_SETTINGS } from '../model';
 import { snapshotSchemaProblems } from '../snapshot/validateSnapshot';
+import { tempTree as tree } from '../testing/tempTree';
 import { scanDirectory, type ScanProgress } from './scanDirectory';
 
-function tree(files: Record<string, string>): string {
-  const root = fs.mkdtempSync(path.join(os.tmpdir(), 'seamline-scan-'));
-  for (const [file, text] of Object.entries(files)) {
-    fs.mkdirSync(path.dirname(path.join(root, file)), { recursive: true });
-    fs.writeFileSync(path.join(root, file), text);
-  }
-  return root;
-}
 
 describe('scanDirectory', () => {
   it('should measure good files and report every file it skipped, with the reason, without stopping', async () => {
