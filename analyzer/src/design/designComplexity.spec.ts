@@ -182,18 +182,60 @@ describe('designComplexity: properties', () => {
 
   it('should stay within 1 ≤ iv ≤ V and never fall when a call is added, on unstructured graphs', () => {
     const moves = fc.array(fc.tuple(fc.nat(), fc.nat()), { maxLength: 4 });
-    fc.assert(
-      fc.property(constructArbitrary(3), moves, fc.array(fc.nat(), { maxLength: 6 }), fc.nat(), (tree, move, picks, extra) => {
-        const graph = rewire(constructGraph(tree), move);
-        const n = graph.blocks.length;
-        const calls = new Set(picks.map((p) => p % n));
-        const iv = designComplexity(graph, calls);
-        expect(iv).toBeGreaterThanOrEqual(1);
-        expect(iv).toBeLessThanOrEqual(Math.max(1, reachableCyclomatic(graph)));
-        expect(designComplexity(graph, new Set([...calls, extra % n]))).toBeGreaterThanOrEqual(iv);
-      }),
-      { numRuns: 1500 },
-    );
+    const property = fc.property(constructArbitrary(3), moves, fc.array(fc.nat(), { maxLength: 6 }), fc.nat(), (tree, move, picks, extra) => {
+      unstructuredBounds(tree, move, picks, extra); // a returned value would count as a failure
+    });
+    fc.assert(property, { numRuns: 1500 });
+  });
+});
+
+/** The unstructured-graph property; returns iv before and after adding the extra call block. */
+function unstructuredBounds(tree: Construct, move: [number, number][], picks: number[], extra: number): { iv: number; more: number } {
+  const graph = rewire(constructGraph(tree), move);
+  const n = graph.blocks.length;
+  const calls = new Set(picks.map((p) => p % n));
+  const iv = designComplexity(graph, calls);
+  expect(iv).toBeGreaterThanOrEqual(1);
+  expect(iv).toBeLessThanOrEqual(Math.max(1, reachableCyclomatic(graph)));
+  const more = designComplexity(graph, new Set([...calls, extra % n]));
+  expect(more).toBeGreaterThanOrEqual(iv);
+  return { iv, more };
+}
+
+describe('designComplexity: regressions on loops entered from outside their head', () => {
+  // Collapsing such a loop once left stale post-dominators for the rest of the round: the
+  // decision above it was then "collapsed" towards the loop head, its region ran past the exit,
+  // and the exit was deleted (iv 2 where it is 1). Expected values are DERIVED from the rules
+  // (NIST SP 500-235 §7.4): a decision stays only when it chooses whether a call node is reached.
+  it('should give iv = 1 when only the entry calls and a decision jumps into a loop body', () => {
+    // 0 (calls) → 1: true into the body 3, false to the head 2; loop 2 ⇄ 3; 2 → 4 → exit 5.
+    const graph = flowGraph('0>1; 1?3:2; 2?3:4@while; 3>2; 4>5');
+    expect(designComplexity(graph, new Set([0]))).toBe(1);
+    // The loop's only way out (block 4) is on every path: still no decision chooses it.
+    expect(designComplexity(graph, new Set([0, 4]))).toBe(1);
+    // A call in the body: the head decides how often it runs and 1 whether it runs at once.
+    expect(designComplexity(graph, new Set([0, 3]))).toBe(3);
+  });
+
+  // The counterexamples fast-check printed, as [tree, rewiring moves, call picks, extra call].
+  it.each<[string, Construct, [number, number][], number[], number, number, number]>([
+    [
+      'a switch whose last case test jumps into the body of a while (extra call after that loop: case tests 1 and 2 decide it)',
+      { t: 'switch', cases: [{ t: 'if', then: { t: 'stmt' } }, { t: 'switch', cases: [{ t: 'while', body: { t: 'stmt' } }] }, { t: 'while', body: { t: 'stmt' } }] },
+      [[1588117619, 1537917246]], [0], 1565453471, 1, 3,
+    ],
+    [
+      'an if/else whose test jumps into the body of the while in its else branch (extra call on every path)',
+      { t: 'ifElse', then: { t: 'seq', items: [{ t: 'stmt' }, { t: 'stmt' }] }, else: { t: 'while', body: { t: 'stmt' } } },
+      [[0, 457823714]], [0], 872705667, 1, 1,
+    ],
+    [
+      'an if whose false edge jumps into the body of the while it guards (extra call at the exit)',
+      { t: 'if', then: { t: 'while', body: { t: 'if', then: { t: 'stmt' } } } },
+      [[1060309465, 1894864613]], [0], 2098592891, 1, 1,
+    ],
+  ])('should reduce %s', (_what, tree, move, picks, extra, iv, more) => {
+    expect(unstructuredBounds(tree, move, picks, extra)).toEqual({ iv, more });
   });
 });
 
