@@ -18,6 +18,8 @@ function task(script, ...args) {
   return { ...JSON.parse(r.stdout.trim().split('\n').pop()), wallMs };
 }
 
+const f = (x) => x.toFixed(0);
+const r = (x) => x.toFixed(2);
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 function measure(tasks, rounds) {
@@ -29,10 +31,11 @@ function measure(tasks, rounds) {
 const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
 if (build.status !== 0) process.exit(1);
 
+// SEAMLINE_BENCH_PART=scan or =map runs one half only.
+const PART = process.env.SEAMLINE_BENCH_PART ?? 'all';
 console.log(`Seamline benchmarks — ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0].model}, ${Math.round(os.totalmem() / 2 ** 30)} GiB, node ${process.version}, ${ROUNDS} rounds (medians)\n`);
+if (PART !== 'map') {
 const rx = measure({ parse: () => task('parse.cjs'), scan: () => task('scan.cjs'), eslint: () => task('eslint.cjs') }, ROUNDS);
-const f = (x) => x.toFixed(0);
-const r = (x) => x.toFixed(2);
 console.log(`rxjs@7.8.2 src: ${rx.scan.last.files} files, ${rx.scan.last.functions} functions`);
 console.log('| task | median time after start-up (ms) | median whole process (ms) | peak memory (MB) |');
 console.log('| --- | ---: | ---: | ---: |');
@@ -58,7 +61,10 @@ console.log('| --- | ---: | ---: | ---: |');
 console.log(`| bare parse | ${f(large.parse.ms)} | ${f(large.parse.wall)} | ${f(large.parse.mb)} |`);
 console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions) | ${f(large.scan.ms)} | ${f(large.scan.wall)} | ${f(large.scan.mb)} |`);
 
+}
+
 // Issue 4: the call graph against its floor, on rxjs and on the JavaScript typeorm ships.
+if (PART !== 'scan') {
 const callRounds = Math.max(1, Math.min(5, ROUNDS));
 console.log('\nCall graph against creating the program and checker and resolving every call signature (same files, same options):');
 console.log('| corpus | floor (ms) | call graph (ms) | ratio | target | met | call graph peak memory (MB) |');
@@ -85,3 +91,4 @@ console.log(`| Seamline: clusterModules + rankGravity (merging edges and buildin
 console.log(`ratio to Louvain alone ${r(lv.ratio)}, to build + Louvain ${r(lv.ratioWithBuild)}; recorded target under 3,000 ms: ${lv.oursMs < 3000 ? 'met' : 'not met'}; peak ${f(lv.maxRssKb / 1024)} MB`);
 const cv = lastJson('carve.cjs');
 console.log(`\nCarve-plan evaluation on 5,000 modules: prepare ${f(cv.prepareMs)} ms once; evaluate median ${f(cv.ms)} ms over ${cv.edits} edits (first ${f(cv.coldEvaluateMs)} ms); target under 100 ms: ${cv.under100ms ? 'met' : 'not met'}`);
+}

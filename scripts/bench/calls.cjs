@@ -13,7 +13,8 @@ const { ts } = require('ts-morph');
 const { rxjsFiles } = require('./corpus.cjs');
 
 const [corpus, what] = process.argv.slice(2);
-const root = corpus === 'typeorm' ? path.dirname(require.resolve('typeorm/package.json')) : rxjsFiles().root;
+// typeorm's exports map hides its package.json from require.resolve.
+const root = corpus === 'typeorm' ? path.resolve(__dirname, '../../node_modules/typeorm') : rxjsFiles().root;
 const { files } = listSourceFiles(root);
 void ts.version;
 
