@@ -18,7 +18,7 @@ import type { Snapshot } from '../model/Snapshot';
 import { snapshotJsonChunks } from '../snapshot/snapshotJsonChunks';
 import type { CliDependencies } from './cliDependencies';
 import { CliInputError } from './CliInputError';
-import { formatSummary } from './formatSummary';
+import { formatCallSummary, formatSummary } from './formatSummary';
 import type { ScanCommand } from './parseCommandLine';
 import { ProgressReporter } from './ProgressReporter';
 import { readInputFile } from './readInputFile';
@@ -94,5 +94,7 @@ export async function runScan(command: ScanCommand, io: CommandIo, deps: CliDepe
   if (out === undefined) await writeChunksToStream(io.stdout, chunks);
   else await writeFileAtomic(out, chunks);
   io.stderr.write(`${formatSummary(snapshot)}${command.out === undefined ? '' : ` · wrote ${command.out}`}\n`);
+  const calls = formatCallSummary(snapshot);
+  if (calls) io.stderr.write(`${calls}\n`);
   return 0;
 }

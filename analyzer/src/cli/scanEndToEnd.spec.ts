@@ -50,7 +50,7 @@ async function run(argv: string[]) {
 describe('seamline scan over the real scanner', () => {
   it('should write a snapshot that the JSON Schema accepts, with the expected V(G)', async () => {
     const result = await run(['scan', 'proj', '--out', 'snap.json']);
-    expect(result.stderr).toMatch(/^scanned 2 files \(1 skipped\) · \d+ functions · ΣV \d+ · \d+ decisions · 1 over the limit of 10 \(rule of thumb, not a verdict\) · wrote snap\.json\n$/);
+    expect(result.stderr).toMatch(/^scanned 2 files \(1 skipped\) · \d+ functions · ΣV \d+ · \d+ decisions · 1 over the limit of 10 \(rule of thumb, not a verdict\) · wrote snap\.json\ncalls: \d+ sites? resolved to \d+ edges? · \d+ unresolved · \d+ into external code[^\n]*\n$/);
     expect(result.code).toBe(0);
     const value = JSON.parse(await fsp.readFile(path.join(root, 'snap.json'), 'utf8'));
     expect(snapshotSchemaProblems(value)).toEqual([]);

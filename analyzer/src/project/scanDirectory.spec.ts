@@ -3,6 +3,7 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import { DEFAULT_SETTINGS } from '../model';
 import { snapshotSchemaProblems } from '../snapshot/validateSnapshot';
+import { formatCallSummary } from '../cli/formatSummary';
 import { tempTree as tree } from '../testing/tempTree';
 import { scanDirectory, type ScanProgress } from './scanDirectory';
 
@@ -78,5 +79,14 @@ describe('scanDirectory with the module map', () => {
     expect(snapshot.totals.integrationComplexity).toBe(snapshot.totals.designComplexity! - snapshot.functions.length + 1);
     expect(progress.filter((p) => p.phase === 'calls').map((p) => p.done)).toEqual([0, 1]);
     expect(snapshotSchemaProblems(snapshot)).toEqual([]);
+  });
+});
+
+describe('the scan summary with the call graph', () => {
+  it('should show unresolved and external calls rather than drop them', async () => {
+    const root = tree({ 'a.ts': 'export function f(x: any) { x.go(); console.log(1); return g(); }\nfunction g() { return 1; }\n' });
+    const snapshot = await scanDirectory(root, { settings: DEFAULT_SETTINGS });
+    expect(formatCallSummary(snapshot)).toMatch(/^calls: 1 sites? resolved to 1 edge · 1 unresolved · 1 into external code \(typescript-lib 1\) · /);
+    expect(formatCallSummary({ ...snapshot, calls: undefined })).toBeUndefined();
   });
 });
