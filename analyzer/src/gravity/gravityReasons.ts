@@ -49,7 +49,8 @@ function sentence(key: GravityComponent, facts: GravityFacts, medians: LevelMedi
 
 /** "6× the median module", or the median itself when it is below 1 (no meaningful ratio). */
 function against(value: number, median: number): string {
-  if (median < 1) return `the median module: ${NUMBER.format(median)}`;
+  if (median === 0) return 'where the median module has none';
+  if (median < 1) return `where the median module has ${NUMBER.format(median)}`;
   const r = value / median;
   return `${r >= 10 ? Math.round(r).toString() : NUMBER.format(Math.round(r * 10) / 10)}× the median module`;
 }
