@@ -1,11 +1,10 @@
 /**
  * Analysis threads
  * ================
- * Worker threads that measure files alongside the calling thread. Each thread loads its own
- * TypeScript compiler, which takes about half a second; started early (before the caller has
- * even loaded its own compiler), that time overlaps with other start-up work instead of adding
- * to the scan. This module imports no compiler itself, so starting threads costs the caller
- * nothing. A thread that dies loses only the file it held; the others and the caller go on.
+ * Worker threads that measure files alongside the calling thread, which keeps measuring while
+ * the threads load their own TypeScript compilers (half a second to a second each). This module
+ * imports no compiler itself. A thread that dies loses only the file it held; the others and
+ * the caller go on.
  */
 import * as fs from 'node:fs';
 import * as os from 'node:os';

@@ -16,13 +16,12 @@ export const BYTES_PER_THREAD = 16 * 1024 * 1024;
 
 /**
  * Measures `files` in this thread and on worker threads, one file at a time each (so a big
- * file does not hold up a batch). Threads come from `started` when the caller started them
- * early; otherwise `threads` asks for a number (this one included), or by default as many as
- * the code's size pays for, up to one per core. Results arrive through `onResult`.
+ * file does not hold up a batch). `threads` asks for a number (this one included); by default
+ * as many as the code's size pays for, up to one per core. Results arrive through `onResult`.
  */
-export async function analyseFiles(job: FileJob, files: string[], threads: number | undefined, onResult: (r: FileResult) => void, started?: AnalysisThreads): Promise<void> {
+export async function analyseFiles(job: FileJob, files: string[], threads: number | undefined, onResult: (r: FileResult) => void): Promise<void> {
   const wanted = threads ?? Math.min(defaultThreads(), Math.floor(totalBytes(job.root, files) / BYTES_PER_THREAD));
-  const pool = started ?? AnalysisThreads.start(Math.max(0, Math.min(wanted, files.length) - 1));
+  const pool = AnalysisThreads.start(Math.max(0, Math.min(wanted, files.length) - 1));
   if (pool.size === 0) {
     for (const file of files) onResult(analyseFile(job, file));
     return;

@@ -3,7 +3,6 @@ import { computeTotals } from '../metrics/computeTotals';
 import { DEFAULT_MAP_SETTINGS, SNAPSHOT_SCHEMA, type CountingSettings, type FunctionRecord, type MapSettings, type SkippedFile, type Snapshot } from '../model';
 import { mapInThread } from './mapInThread';
 import { analyseFiles } from './analyseFiles';
-import type { AnalysisThreads } from './AnalysisThreads';
 import { listSourceFiles } from './listSourceFiles';
 import { MAX_LINE_LENGTH } from './classifySource';
 import { analyzerVersion } from './analyzerVersion';
@@ -20,8 +19,6 @@ export interface ScanOptions {
   maxLineLength?: number;
   /** Threads, this one included (default: as many as the code's size pays for, up to one per core). */
   threads?: number;
-  /** Threads the caller started early (see AnalysisThreads); used instead of starting new ones. */
-  startedThreads?: AnalysisThreads;
   /** Resolve calls and build the module map, clusters and gravity (default true; `--no-calls` turns it off). */
   calls?: boolean;
   /** Folder depth, Louvain resolution and seed of the module map. */
@@ -43,13 +40,7 @@ export interface ScanProgress {
  */
 export async function scanDirectory(dir: string, options: ScanOptions, onProgress?: (p: ScanProgress) => void): Promise<Snapshot> {
   const root = path.resolve(dir);
-  let listed: ReturnType<typeof listSourceFiles>;
-  try {
-    listed = listSourceFiles(root, options.tsconfig);
-  } catch (err) {
-    options.startedThreads?.close();
-    throw err;
-  }
+  const listed = listSourceFiles(root, options.tsconfig);
   onProgress?.({ phase: 'discover', done: listed.files.length, total: listed.files.length });
 
   const functions: FunctionRecord[] = [];
@@ -64,7 +55,7 @@ export async function scanDirectory(dir: string, options: ScanOptions, onProgres
     }
     else skipped.push(result.skipped);
     onProgress?.({ phase: 'analyse', done: ++done, total: listed.files.length, file: result.file });
-  }, options.startedThreads);
+  });
 
   // Completion order depends on the threads; the snapshot must not.
   functions.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : topLevelFirst(a, b) || a.line - b.line || a.id.localeCompare(b.id)));
