@@ -3,7 +3,7 @@ import { integrationComplexity } from '../design/integrationComplexity';
 import type { FunctionRecord, ModuleLevel, ModuleRecord } from '../model';
 import { buildModuleMap, type ModuleMapInput } from './buildModuleMap';
 import { call, input, topLevel, unit } from './fixtures/records';
-import { folderOf } from './moduleOfFile';
+import { folderOf, PackageLocator } from './moduleOfFile';
 
 const SEGMENTS = ['src', 'lib', 'orders', 'billing', 'ui'];
 
@@ -99,8 +99,10 @@ describe('buildModuleMap: properties on generated codebases', () => {
       fc.property(codebase, (given) => {
         const { modules } = buildModuleMap(given);
         const byLevel = levels(modules);
+        // In a package, folders count from the package's own folder.
+        const packages = new PackageLocator(given.packages.map((p) => p.path).filter((p) => p !== '.'));
         for (const folder of byLevel.get('folder')!) {
-          const files = byLevel.get('file')!.filter((f) => `folder:${folderOf(f.path, given.settings.folderDepth)}` === folder.id);
+          const files = byLevel.get('file')!.filter((f) => `folder:${folderOf(f.path, given.settings.folderDepth, packages.packageOf(f.path))}` === folder.id);
           for (const key of ['functions', 'cyclomatic', 'decisions', 'designComplexity', 'lines'] as const) expect(folder[key]).toBe(sum(files, key));
           expect(folder.fanIn).toBeLessThanOrEqual(sum(files, 'fanIn'));
           expect(folder.maxCyclomatic).toBe(Math.max(...files.map((f) => f.maxCyclomatic)));

@@ -86,7 +86,8 @@ describe('buildModuleMap: levels, sums and edges', () => {
   it('should list modules by level, then path', () => {
     expect(map.modules.map((m) => m.id)).toEqual([
       'file:main.ts', 'file:packages/ui/src/view.ts', 'file:src/billing/bill.ts', 'file:src/orders/route.ts',
-      'folder:.', 'folder:packages/ui', 'folder:src/billing', 'folder:src/orders',
+      // In a package, folders count from the package's folder: view.ts sits in packages/ui/src.
+      'folder:.', 'folder:packages/ui/src', 'folder:src/billing', 'folder:src/orders',
       'package:.', 'package:packages/ui',
     ]);
     expect(find(map.modules, 'package:packages/ui').name).toBe('@shop/ui');
@@ -107,7 +108,7 @@ describe('buildModuleMap: levels, sums and edges', () => {
     expect([orders.fanIn, orders.fanOut, orders.ca, orders.ce]).toEqual([5, 3, 2, 1]);
     expect(map.moduleEdges.filter((e) => e.level === 'folder')).toEqual([
       { level: 'folder', from: 'folder:.', to: 'folder:src/orders', weight: 2, calls: 1, imports: 1 },
-      { level: 'folder', from: 'folder:packages/ui', to: 'folder:src/orders', weight: 4, calls: 4, imports: 0 },
+      { level: 'folder', from: 'folder:packages/ui/src', to: 'folder:src/orders', weight: 4, calls: 4, imports: 0 },
       { level: 'folder', from: 'folder:src/orders', to: 'folder:src/billing', weight: 4, calls: 3, imports: 1 },
     ]);
   });

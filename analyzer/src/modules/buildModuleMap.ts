@@ -120,17 +120,15 @@ export function buildModuleMap(input: ModuleMapInput): ModuleMap {
 }
 
 function levelsOf(files: string[], input: ModuleMapInput): Level[] {
-  const levels: Level[] = [
-    { level: 'file', moduleOf: new Map(files.map((f) => [f, f])) },
-    { level: 'folder', moduleOf: new Map(files.map((f) => [f, folderOf(f, input.settings.folderDepth)])) },
-  ];
   const nameOf = new Map(input.packages.map((p) => [normalizeFolder(p.path), p.name]));
   const found = [...nameOf.keys()].filter((p) => p !== '.');
   // Without a package below the root the package level would repeat the whole codebase as one module.
-  if (found.length > 0) {
-    const locator = new PackageLocator(found);
-    levels.push({ level: 'package', moduleOf: new Map(files.map((f) => [f, locator.packageOf(f)])), nameOf });
-  }
+  const locator = found.length > 0 ? new PackageLocator(found) : undefined;
+  const levels: Level[] = [
+    { level: 'file', moduleOf: new Map(files.map((f) => [f, f])) },
+    { level: 'folder', moduleOf: new Map(files.map((f) => [f, folderOf(f, input.settings.folderDepth, locator?.packageOf(f))])) },
+  ];
+  if (locator) levels.push({ level: 'package', moduleOf: new Map(files.map((f) => [f, locator.packageOf(f)])), nameOf });
   return levels;
 }
 

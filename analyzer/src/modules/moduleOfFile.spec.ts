@@ -10,6 +10,15 @@ describe('folderOf', () => {
   ])('should put %s at depth %i into %s', (file, depth, folder) => {
     expect(folderOf(file, depth)).toBe(folder);
   });
+
+  it.each([
+    ['packages/billing/src/tax/vat.ts', 2, 'packages/billing', 'packages/billing/src/tax'],
+    ['packages/billing/src/money.ts', 2, 'packages/billing', 'packages/billing/src'],
+    ['packages/billing/index.ts', 2, 'packages/billing', 'packages/billing'],
+    ['src/orders/api/a.ts', 2, '.', 'src/orders'],
+  ])('should count the folders of %s from its package (depth %i, package %s) into %s', (file, depth, pkg, folder) => {
+    expect(folderOf(file, depth, pkg)).toBe(folder);
+  });
 });
 
 describe('PackageLocator', () => {

@@ -2,15 +2,21 @@
  * Which module a file belongs to
  * ==============================
  * - folder level: the first `folderDepth` segments of the file's folder (`src/orders/api/x.ts`
- *   at depth 2 is in `src/orders`); a file at the root is in the folder `.`;
+ *   at depth 2 is in `src/orders`); a file at the root is in the folder `.`; in a package, the
+ *   segments count from the package's folder (`packages/billing/src/tax/vat.ts` at depth 2 is in
+ *   `packages/billing/src/tax`), so that each package gets folders of its own;
  * - package level: the innermost package folder that contains the file; a file in no package
  *   is in the root package `.`.
  * Paths are posix and relative to the scanned root.
  */
 import { ModuleMapError } from './ModuleMapError';
 
-/** The folder module of a file at the given depth (≥ 1). */
-export function folderOf(file: string, folderDepth: number): string {
+/** The folder module of a file at the given depth (≥ 1), counted from its package's folder when it has one. */
+export function folderOf(file: string, folderDepth: number, packageFolder = '.'): string {
+  if (packageFolder !== '.' && file.startsWith(`${packageFolder}/`)) {
+    const inner = folderOf(file.slice(packageFolder.length + 1), folderDepth);
+    return inner === '.' ? packageFolder : `${packageFolder}/${inner}`;
+  }
   const segments = file.split('/');
   segments.pop();
   return segments.length === 0 ? '.' : segments.slice(0, folderDepth).join('/');

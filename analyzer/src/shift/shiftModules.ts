@@ -7,7 +7,7 @@
  * A module present on one side only has zeros on the other. Sorted by level (file first), then path.
  */
 import type { FunctionRecord } from '../model';
-import { folderOf } from '../modules/moduleOfFile';
+import { folderOf, PackageLocator } from '../modules/moduleOfFile';
 import type { LimitCrossing, ModuleShift, ShiftFigures } from './Shift';
 
 /** Zero figures: a module or codebase with no functions. */
@@ -33,10 +33,18 @@ export function crossing(before: number, after: number, limit: number): LimitCro
 }
 
 /** Per-module deltas at the file and folder levels (see the file header). */
-export function shiftModules(before: readonly FunctionRecord[], after: readonly FunctionRecord[], limit: number, folderDepth: number): ModuleShift[] {
+export function shiftModules(
+  before: readonly FunctionRecord[],
+  after: readonly FunctionRecord[],
+  limit: number,
+  folderDepth: number,
+  packagesOf: { before: readonly string[]; after: readonly string[] } = { before: [], after: [] },
+): ModuleShift[] {
   const modules = new Map<string, ModuleShift>();
+  const locators = { before: new PackageLocator(packagesOf.before), after: new PackageLocator(packagesOf.after) };
   const add = (side: 'before' | 'after', fn: FunctionRecord) => {
-    for (const [level, path] of [['file', fn.file], ['folder', folderOf(fn.file, folderDepth)]] as const) {
+    const folder = folderOf(fn.file, folderDepth, locators[side].packageOf(fn.file));
+    for (const [level, path] of [['file', fn.file], ['folder', folder]] as const) {
       const id = `${level}:${path}`;
       let m = modules.get(id);
       if (m === undefined) {

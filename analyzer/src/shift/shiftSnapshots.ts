@@ -71,7 +71,9 @@ export function shiftSnapshots(before: Snapshot, after: Snapshot): Shift {
   totals.unexplained = totals.deltaCyclomaticStrict - (totals.deltaDecisions + totals.deltaFunctions);
   totals.reportingDelta = totals.deltaCyclomaticStrict - totals.deltaCyclomatic;
 
-  const modules = shiftModules(before.functions, after.functions, limit, folderDepth);
+  // Each side's folders count from its own packages, as its module map does.
+  const packagesOf = (s: Snapshot) => (s.modules ?? []).filter((m) => m.level === 'package').map((m) => m.path);
+  const modules = shiftModules(before.functions, after.functions, limit, folderDepth, { before: packagesOf(before), after: packagesOf(after) });
   return {
     limit,
     folderDepth,
