@@ -44,16 +44,17 @@ export function mapCodebase(input: MapInput, functions: FunctionRecord[]): Pick<
     const sourceFile = program.getSourceFile(path.join(input.root, file));
     if (sourceFile) abstractness.set(file, countAbstractness(sourceFile));
   }
-  const fileOf = new Map(functions.map((f) => [f.id, f.file]));
+  const measured = new Set(functions.map((f) => f.id));
   const withDesign = functions.map((f) => {
     const facts = graph.perFunction.get(f.id);
     // Every function is a module in McCabe's design reduction: a call to any other function counts.
-    const sites = (facts?.callSites ?? []).filter((s) => s.to.some((to) => to !== f.id && fileOf.has(to)));
+    const sites = (facts?.callSites ?? []).filter((s) => s.to.some((to) => to !== f.id && measured.has(to)));
+    const flow = fromCompactGraph(f.graph);
     return {
       ...f,
       unresolvedCalls: facts?.unresolvedCalls ?? 0,
       externalCalls: facts?.externalCalls ?? 0,
-      designComplexity: designComplexity(fromCompactGraph(f.graph), callBlocksOf(fromCompactGraph(f.graph), sites)),
+      designComplexity: designComplexity(flow, callBlocksOf(flow, sites)),
     };
   });
   const { modules, moduleEdges } = buildModuleMap({
