@@ -36,6 +36,7 @@ export { buildModuleMap } from './modules/buildModuleMap';
 export { clusterModules } from './clusters/clusterModules';
 export { modularity } from './clusters/modularity';
 export { rankGravity } from './gravity/rankGravity';
+export { moduleMembership } from './carve/moduleMembership';
 export { carvePlanFromClusters, evaluateCarvePlan, evaluateCarve, prepareCarve } from './carve/evaluateCarvePlan';
 export type { CarveEvaluation, CarvePlan, ServiceFigures } from './carve/evaluateCarvePlan';
 export { shiftSnapshots } from './shift/shiftSnapshots';

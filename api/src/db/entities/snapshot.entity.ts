@@ -1,8 +1,13 @@
 import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Codebase } from './codebase.entity';
+import { User } from './user.entity';
 
 export const SNAPSHOT_STATUSES = ['queued', 'running', 'ready', 'failed'] as const;
 export type SnapshotStatus = (typeof SNAPSHOT_STATUSES)[number];
+
+/** How the code came in: a zip analysed by a worker, or a snapshot `seamline push`ed from CI. */
+export const SNAPSHOT_SOURCES = ['upload', 'push'] as const;
+export type SnapshotSource = (typeof SNAPSHOT_SOURCES)[number];
 
 /** Headline figures of a finished analysis (filled by the analyzer's result). */
 export interface SnapshotTotals {
@@ -16,6 +21,7 @@ export interface SnapshotTotals {
 @Entity({ name: 'snapshot' })
 @Check('CK_snapshot_status', `"status" IN ('queued', 'running', 'ready', 'failed')`)
 @Check('CK_snapshot_progress', `"progress" BETWEEN 0 AND 100`)
+@Check('CK_snapshot_source', `"source" IN ('upload', 'push')`)
 @Index('ix_snapshot_codebase_created', ['codebaseId', 'createdAt'])
 export class Snapshot {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'PK_snapshot' })
@@ -34,6 +40,52 @@ export class Snapshot {
   /** Percent done while running, 0–100. */
   @Column({ type: 'smallint', default: 0 })
   progress!: number;
+
+  /** What the analysis is doing now (`extract`, `discover`, `analyse`, `calls`, `store`…). */
+  @Column({ type: 'varchar', length: 16, nullable: true })
+  phase!: string | null;
+
+  @Column({ type: 'varchar', length: 8, default: 'upload' })
+  source!: SnapshotSource;
+
+  /** The uploaded zip or pushed file while the job waits for it; removed once stored or failed. */
+  @Column({ name: 'input_file', type: 'text', nullable: true })
+  inputFile!: string | null;
+
+  /** How many times a worker started on it (a retried job counts again). */
+  @Column({ type: 'smallint', default: 0 })
+  attempts!: number;
+
+  @Column({ name: 'created_by', type: 'uuid', nullable: true })
+  createdById!: string | null;
+
+  @ManyToOne(() => User, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'created_by', foreignKeyConstraintName: 'FK_snapshot_created_by' })
+  createdBy?: User | null;
+
+  /** The scanned folder's name, the analyzer version, files scanned and skipped (with reasons). */
+  @Column({ type: 'varchar', length: 255, nullable: true })
+  root!: string | null;
+
+  @Column({ name: 'generator_version', type: 'varchar', length: 32, nullable: true })
+  generatorVersion!: string | null;
+
+  @Column({ name: 'files_scanned', type: 'integer', nullable: true })
+  filesScanned!: number | null;
+
+  @Column({ type: 'jsonb', nullable: true })
+  skipped!: unknown[] | null;
+
+  @Column({ name: 'map_settings', type: 'jsonb', nullable: true })
+  mapSettings!: Record<string, unknown> | null;
+
+  /** Calls into external packages, summed per package. */
+  @Column({ type: 'jsonb', nullable: true })
+  externals!: unknown[] | null;
+
+  /** The latest coverage import: its format and the report's files the scan did not have. */
+  @Column({ type: 'jsonb', nullable: true })
+  coverage!: Record<string, unknown> | null;
 
   /** Why the analysis failed, in words a person can act on. */
   @Column({ type: 'text', nullable: true })
@@ -54,6 +106,9 @@ export class Snapshot {
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt!: Date;
+
+  @Column({ name: 'started_at', type: 'timestamptz', nullable: true })
+  startedAt!: Date | null;
 
   @Column({ name: 'finished_at', type: 'timestamptz', nullable: true })
   finishedAt!: Date | null;

@@ -14,6 +14,10 @@ export class Workspace {
   @Column({ type: 'varchar', length: 200 })
   name!: string;
 
+  /** The limit and counting settings analyses use unless told otherwise (see workspace-settings.ts). */
+  @Column({ type: 'jsonb', default: {} })
+  settings!: Record<string, unknown>;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt!: Date;
 }

@@ -1,0 +1,27 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import type { CompactGraph } from '../../analyzer-lib';
+import type { Snapshot } from './snapshot.entity';
+import { snapshotKey, snapshotRelation } from './snapshot-owned';
+
+/** The wide part of a function: its stored graph, covered outcomes and (when embedded) source. */
+@Entity({ name: 'function_detail' })
+export class FunctionDetail {
+  @snapshotKey('function_detail')
+  snapshotId!: string;
+
+  @snapshotRelation('function_detail')
+  snapshot?: Snapshot;
+
+  @PrimaryColumn({ name: 'function_id', type: 'text', primaryKeyConstraintName: 'PK_function_detail' })
+  functionId!: string;
+
+  @Column({ type: 'jsonb' })
+  graph!: CompactGraph;
+
+  /** Per decision: [true covered, false covered]. */
+  @Column({ name: 'coverage_outcomes', type: 'jsonb', nullable: true })
+  coverageOutcomes!: [boolean, boolean][] | null;
+
+  @Column({ type: 'text', nullable: true })
+  source!: string | null;
+}

@@ -1,0 +1,22 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import type { Snapshot } from './snapshot.entity';
+import { snapshotKey, snapshotRelation } from './snapshot-owned';
+
+/** An import of one scanned file by another. */
+@Entity({ name: 'import_edge' })
+export class ImportEdgeRow {
+  @snapshotKey('import_edge')
+  snapshotId!: string;
+
+  @snapshotRelation('import_edge')
+  snapshot?: Snapshot;
+
+  @PrimaryColumn({ type: 'integer', primaryKeyConstraintName: 'PK_import_edge' })
+  ordinal!: number;
+
+  @Column({ name: 'from_file', type: 'text' })
+  fromFile!: string;
+
+  @Column({ name: 'to_file', type: 'text' })
+  toFile!: string;
+}
