@@ -9,6 +9,8 @@ export interface RawZipEntry {
   data?: Buffer | string;
   /** 0 stores, 8 deflates (the default). */
   method?: number;
+  /** Written as the entry's data instead of `data` packed by `method`. */
+  packed?: Buffer;
   /** Full unix st_mode, written to the high 16 bits of the external attributes. */
   unixMode?: number;
   /** General purpose bit flag; bit 0 marks encryption, bit 11 UTF-8 names (set by default). */
@@ -61,7 +63,7 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     const name = toName(entry.name);
     const data = Buffer.from(entry.data ?? '');
     const method = entry.method ?? 8;
-    const packed = method === 8 ? deflateRawSync(data) : data;
+    const packed = entry.packed ?? (method === 8 ? deflateRawSync(data) : data);
     const w: Written = {
       offset,
       name,
