@@ -1,3 +1,6 @@
+/** The commands of the `seamline` CLI. */
+export type CommandName = 'scan' | 'check' | 'push';
+
 /** A command line Seamline cannot run: unknown option, missing value, bad value. Exit code 2. */
 export class UsageError extends Error {
   override readonly name = 'UsageError';
@@ -8,7 +11,7 @@ export class UsageError extends Error {
    */
   constructor(
     readonly reason: string,
-    readonly command?: 'scan' | 'check',
+    readonly command?: CommandName,
   ) {
     super(`analyzer/cli: ${reason}`);
   }

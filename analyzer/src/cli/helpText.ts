@@ -8,13 +8,15 @@ Commands:
                           SARIF or CSV
   check <snapshot.json>   exit 1 when a function's V(G) is over the limit (with a
                           baseline: only new or worsened ones)
+  push <snapshot.json>    upload a snapshot to a Seamline server (in CI)
 
 Options:
   -h, --help              show help (also: seamline <command> --help)
   --version               show Seamline's version
 
-Exit codes: 0 fine, 1 check found functions over the limit, 2 usage or input error,
-3 unexpected failure.
+Exit codes: 0 fine, 1 check found functions over the limit (push --wait: the server could
+not analyse the snapshot), 2 usage or input error (push: the server refused or could not be
+reached), 3 unexpected failure.
 `;
 
 /** `seamline scan --help`. */

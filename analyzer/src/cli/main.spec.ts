@@ -68,8 +68,8 @@ describe('runCli: help and version', () => {
 
 describe('runCli: usage errors', () => {
   it.each<[string[], string]>([
-    [[], 'seamline: no command given (scan or check)\nRun `seamline --help` for usage.\n'],
-    [['lint'], "seamline: unknown command 'lint': the commands are scan and check\nRun `seamline --help` for usage.\n"],
+    [[], 'seamline: no command given (scan, check or push)\nRun `seamline --help` for usage.\n'],
+    [['lint'], "seamline: unknown command 'lint': the commands are scan, check and push\nRun `seamline --help` for usage.\n"],
     [['scan', 'src', '--bogus'], 'seamline scan: unknown option --bogus\nRun `seamline scan --help` for usage.\n'],
     [['scan', 'src', '--out'], 'seamline scan: option --out needs a value\nRun `seamline scan --help` for usage.\n'],
     [['scan', 'src', '--format', 'yaml'], "seamline scan: --format must be json or sarif or csv or graphml, got 'yaml'\nRun `seamline scan --help` for usage.\n"],

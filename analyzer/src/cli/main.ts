@@ -15,6 +15,7 @@ import type { CliDependencies } from './cliDependencies';
 import { CliInputError } from './CliInputError';
 import { CHECK_HELP, MAIN_HELP, SCAN_HELP } from './helpText';
 import { parseCommandLine } from './parseCommandLine';
+import { PUSH_HELP } from './pushHelpText';
 import { runScan } from './runScan';
 import { UsageError } from './UsageError';
 import { OutputError, PENDING_TEMP_FILES } from './writeOutput';
@@ -29,11 +30,15 @@ export interface CliIo {
   cwd: string;
   /** Whether stderr is a terminal (draws the progress bar in place). */
   isTTY?: boolean;
+  /** Environment variables (push reads its token from SEAMLINE_TOKEN); default process.env. */
+  env?: NodeJS.ProcessEnv;
 }
+
+const HELP = { scan: SCAN_HELP, check: CHECK_HELP, push: PUSH_HELP } as const;
 
 // Which command's name prefixes an error, when the command line got that far.
 function commandOf(argv: readonly string[]): string {
-  return argv[0] === 'scan' || argv[0] === 'check' ? `seamline ${argv[0]}` : 'seamline';
+  return argv[0] === 'scan' || argv[0] === 'check' || argv[0] === 'push' ? `seamline ${argv[0]}` : 'seamline';
 }
 
 function report(error: unknown, argv: readonly string[], io: CliIo, deps: CliDependencies): number {
@@ -70,10 +75,10 @@ function report(error: unknown, argv: readonly string[], io: CliIo, deps: CliDep
 export async function runCli(argv: string[], io: CliIo, deps: Partial<CliDependencies> = {}): Promise<number> {
   const dependencies: CliDependencies = { ...DEFAULT_DEPENDENCIES, ...deps };
   try {
-    const command = parseCommandLine(argv);
+    const command = parseCommandLine(argv, io.env ?? process.env);
     switch (command.kind) {
       case 'help':
-        io.stdout.write(command.topic === 'scan' ? SCAN_HELP : command.topic === 'check' ? CHECK_HELP : MAIN_HELP);
+        io.stdout.write(command.topic ? HELP[command.topic] : MAIN_HELP);
         return EXIT.ok;
       case 'version':
         io.stdout.write(`${analyzerVersion()}\n`);
@@ -83,6 +88,9 @@ export async function runCli(argv: string[], io: CliIo, deps: Partial<CliDepende
       case 'check':
         // Loaded on use: reading snapshots compiles the JSON Schema (~0.2 s), which a scan never needs.
         return await (require('./runCheck') as typeof import('./runCheck')).runCheck(command, io);
+      case 'push':
+        // Loaded on use, like check: it validates the snapshot before sending it.
+        return await (require('./pushSnapshot') as typeof import('./pushSnapshot')).runPush(command, io);
     }
   } catch (error) {
     return report(error, argv, io, dependencies);

@@ -1,6 +1,7 @@
 import { DEFAULT_SETTINGS } from '../model';
 import { parseCommandLine } from './parseCommandLine';
 import { UsageError } from './UsageError';
+import type { CommandName } from './UsageError';
 
 function usageError(argv: string[]): UsageError {
   try {
@@ -67,11 +68,11 @@ describe('parseCommandLine', () => {
     expect(parseCommandLine(['scan', '--', '--help'])).toMatchObject({ kind: 'scan', dir: '--help' });
   });
 
-  it.each<[string[], string, 'scan' | 'check' | undefined]>([
-    [[], 'no command given (scan or check)', undefined],
-    [['scna', 'src'], "unknown command 'scna': the commands are scan and check", undefined],
+  it.each<[string[], string, CommandName | undefined]>([
+    [[], 'no command given (scan, check or push)', undefined],
+    [['scna', 'src'], "unknown command 'scna': the commands are scan, check and push", undefined],
     [['--limit', '3'], 'unknown option --limit (options go after the command)', undefined],
-    [['help', 'push'], "no help for 'push': the commands are scan and check", undefined],
+    [['help', 'lint'], "no help for 'lint': the commands are scan, check and push", undefined],
     [['scan'], 'missing folder to scan', 'scan'],
     [['scan', 'a', 'b'], 'expects one folder to scan, got 2: a b', 'scan'],
     [['scan', 'src', '--bogus'], 'unknown option --bogus', 'scan'],

@@ -12,7 +12,10 @@ import { parseArgs } from 'node:util';
 import { DEFAULT_SETTINGS } from '../model/CountingSettings';
 import type { CountingSettings } from '../model/CountingSettings';
 import type { MapSettings, ModuleLevel } from '../model/ModuleMap';
+import { PUSH_OPTIONS, pushCommandFrom } from './pushCommandLine';
+import type { PushCommand } from './pushCommandLine';
 import { UsageError } from './UsageError';
+import type { CommandName } from './UsageError';
 
 /** What `seamline scan` was asked to do. */
 export interface ScanCommand {
@@ -48,7 +51,9 @@ export interface CheckCommand {
 }
 
 /** Any command line Seamline understands. */
-export type CliCommand = ScanCommand | CheckCommand | { kind: 'help'; topic?: 'scan' | 'check' } | { kind: 'version' };
+export type CliCommand = ScanCommand | CheckCommand | PushCommand | { kind: 'help'; topic?: CommandName } | { kind: 'version' };
+
+const COMMANDS: readonly string[] = ['scan', 'check', 'push'] satisfies CommandName[];
 
 const SCAN_OPTIONS = {
   tsconfig: { type: 'string' },
@@ -84,7 +89,7 @@ function wantsHelp(args: readonly string[]): boolean {
 }
 
 // parseArgs' messages are long and vary by Node version; its error codes do not.
-function reword(error: unknown, command: 'scan' | 'check'): UsageError {
+function reword(error: unknown, command: CommandName): UsageError {
   const { code, message } = error as { code?: string; message: string };
   // `Option '-o, --out <value>' argument missing`: name the long form.
   const option = /'(?:-\w, )?(-[^' ,]+)/.exec(message)?.[1];
@@ -97,7 +102,7 @@ function reword(error: unknown, command: 'scan' | 'check'): UsageError {
   return new UsageError(message, command);
 }
 
-function parse<T extends typeof SCAN_OPTIONS | typeof CHECK_OPTIONS>(args: string[], options: T, command: 'scan' | 'check') {
+function parse<T extends typeof SCAN_OPTIONS | typeof CHECK_OPTIONS | typeof PUSH_OPTIONS>(args: string[], options: T, command: CommandName) {
   try {
     return parseArgs({ args, options, strict: true, allowPositionals: true });
   } catch (error) {
@@ -182,22 +187,31 @@ function parseCheck(args: string[]): CheckCommand {
   };
 }
 
-/** The command `argv` asks for; throws UsageError for anything else. */
-export function parseCommandLine(argv: readonly string[]): CliCommand {
+function parsePush(args: string[], env: NodeJS.ProcessEnv): PushCommand {
+  const { values, positionals } = parse(args, PUSH_OPTIONS, 'push');
+  return pushCommandFrom(values, positionals, env);
+}
+
+function isCommand(word: string | undefined): word is CommandName {
+  return word !== undefined && COMMANDS.includes(word);
+}
+
+/** The command `argv` asks for; throws UsageError for anything else. `env` may hold push's token. */
+export function parseCommandLine(argv: readonly string[], env: NodeJS.ProcessEnv = process.env): CliCommand {
   const [first, ...rest] = argv;
-  if (first === 'scan' || first === 'check') {
+  if (isCommand(first)) {
     if (wantsHelp(rest)) return { kind: 'help', topic: first };
-    return first === 'scan' ? parseScan(rest) : parseCheck(rest);
+    return first === 'scan' ? parseScan(rest) : first === 'check' ? parseCheck(rest) : parsePush(rest, env);
   }
-  if (first === undefined) throw new UsageError('no command given (scan or check)');
+  if (first === undefined) throw new UsageError('no command given (scan, check or push)');
   if (first === '--help' || first === '-h') return { kind: 'help' };
   if (first === 'help') {
     const topic = rest[0];
     if (topic === undefined) return { kind: 'help' };
-    if (topic === 'scan' || topic === 'check') return { kind: 'help', topic };
-    throw new UsageError(`no help for '${topic}': the commands are scan and check`);
+    if (isCommand(topic)) return { kind: 'help', topic };
+    throw new UsageError(`no help for '${topic}': the commands are scan, check and push`);
   }
   if (first === '--version') return { kind: 'version' };
   if (first.startsWith('-')) throw new UsageError(`unknown option ${first} (options go after the command)`);
-  throw new UsageError(`unknown command '${first}': the commands are scan and check`);
+  throw new UsageError(`unknown command '${first}': the commands are scan, check and push`);
 }
