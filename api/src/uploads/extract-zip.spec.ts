@@ -59,6 +59,11 @@ describe('extractZip', () => {
       expect(await tree(out)).toEqual(['app/', 'app/b.ts', 'app/src/', 'app/src/a.ts', 'app/x/']);
     });
 
+    it('should unpack to the same name it checked, the Unicode Path one when present', async () => {
+      await extract(zipBytes([{ name: 'app/caf\x82.ts', unicodePath: 'app/café.ts', data: 'c', flags: 0 }]));
+      expect(await tree(out)).toEqual(['app/', 'app/café.ts']);
+    });
+
     it('should unpack into an empty folder that already exists', async () => {
       await mkdir(out, { recursive: true });
       await extract(zipBytes([good]));

@@ -76,10 +76,8 @@ export class ZipEntryChecker {
 
   check(entry: Entry): CheckedEntry {
     const name = entryName(entry);
+    // The entry count limit is checked once, when the zip is opened: yauzl reads exactly that many.
     this.entries++;
-    if (this.entries > this.limits.maxEntries) {
-      throw refuseEntry('too_many_entries', name, `the zip has more than ${this.limits.maxEntries} entries, the limit.`, this.limits.maxEntries);
-    }
     const folderByMode = fileTypeIsFolder(entry, name);
     if (entry.isEncrypted()) {
       throw refuseEntry('unsupported_entry', name, 'it is password-protected; upload a zip made without a password.');

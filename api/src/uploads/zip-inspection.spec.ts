@@ -135,6 +135,11 @@ describe('inspectZip', () => {
       expect(err.status).toBe(422);
     });
 
+    it('should judge the Unicode Path name readers use, not the plain one beside it', async () => {
+      const bytes = zipBytes([good, { name: 'app/harmless.ts', unicodePath: '../evil.ts', data: 'x' }]);
+      await expectEntryRefused(bytes, 'unsafe_entry', '../evil.ts', /".." segments lead outside the zip's root/);
+    });
+
     it('should refuse a symbolic link', async () => {
       const bytes = zipBytes([good, { name: 'app/passwd', data: '/etc/passwd', method: 0, unixMode: S_IFLNK | 0o777 }]);
       await expectEntryRefused(bytes, 'unsafe_entry', 'app/passwd', /a symbolic link; Seamline never unpacks links/);

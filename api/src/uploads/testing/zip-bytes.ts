@@ -19,6 +19,8 @@ export interface RawZipEntry {
   declaredSize?: number;
   /** Overrides the checksum both headers declare. */
   crc?: number;
+  /** A second name in an Info-ZIP Unicode Path extra field, which readers prefer to `name`. */
+  unicodePath?: string;
   /** Writes no data of its own: the central entry points at entry N's local header instead. */
   sharesDataWith?: number;
 }
@@ -36,6 +38,7 @@ export const S_IFSOCK = 0o140000;
 interface Written {
   offset: number;
   name: Buffer;
+  extra: Buffer;
   flags: number;
   method: number;
   crc: number;
@@ -57,7 +60,7 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     if (entry.sharesDataWith !== undefined) {
       const shared = written[entry.sharesDataWith];
       if (!shared) throw new Error(`zipBytes: entry ${entry.sharesDataWith} is not written yet`);
-      written.push({ ...shared, name: toName(entry.name) });
+      written.push({ ...shared, name: toName(entry.name), extra: unicodePathField(entry) });
       continue;
     }
     const name = toName(entry.name);
@@ -67,6 +70,7 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     const w: Written = {
       offset,
       name,
+      extra: unicodePathField(entry),
       flags: entry.flags ?? UTF8_NAMES,
       method,
       crc: entry.crc ?? crc32(data),
@@ -84,9 +88,10 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     local.writeUInt32LE(w.compressedSize, 18);
     local.writeUInt32LE(w.declaredSize, 22);
     local.writeUInt16LE(name.length, 26);
-    local.writeUInt16LE(0, 28);
+    local.writeUInt16LE(w.extra.length, 28);
     push(local);
     push(name);
+    push(w.extra);
     push(packed);
     written.push(w);
   }
@@ -106,7 +111,7 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     central.writeUInt32LE(w.compressedSize, 20);
     central.writeUInt32LE(w.declaredSize, 24);
     central.writeUInt16LE(w.name.length, 28);
-    central.writeUInt16LE(0, 30);
+    central.writeUInt16LE(w.extra.length, 30);
     central.writeUInt16LE(0, 32);
     central.writeUInt16LE(0, 34);
     central.writeUInt16LE(0, 36);
@@ -114,6 +119,7 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
     central.writeUInt32LE(w.offset, 42);
     push(central);
     push(w.name);
+    push(w.extra);
   });
   const centralSize = offset - centralStart;
 
@@ -125,6 +131,18 @@ export function zipBytes(entries: RawZipEntry[]): Buffer {
   end.writeUInt32LE(centralStart, 16);
   push(end);
   return Buffer.concat(chunks);
+}
+
+function unicodePathField(entry: RawZipEntry): Buffer {
+  if (entry.unicodePath === undefined) return Buffer.alloc(0);
+  const path = Buffer.from(entry.unicodePath, 'utf8');
+  const field = Buffer.alloc(9 + path.length);
+  field.writeUInt16LE(0x7075, 0);
+  field.writeUInt16LE(5 + path.length, 2);
+  field.writeUInt8(1, 4);
+  field.writeUInt32LE(crc32(toName(entry.name)) >>> 0, 5);
+  path.copy(field, 9);
+  return field;
 }
 
 function toName(name: string | Buffer): Buffer {
