@@ -39,6 +39,8 @@ export { rankGravity } from './gravity/rankGravity';
 export { moduleMembership } from './carve/moduleMembership';
 export { carvePlanFromClusters, evaluateCarvePlan, evaluateCarve, prepareCarve } from './carve/evaluateCarvePlan';
 export type { CarveEvaluation, CarvePlan, ServiceFigures } from './carve/evaluateCarvePlan';
+export type { CarveIndex } from './carve/prepareCarve';
+export { UNASSIGNED_SERVICE } from './carve/CarvePlan';
 export { shiftSnapshots } from './shift/shiftSnapshots';
 export { shiftPlan } from './shift/shiftPlan';
 export { toGraphml } from './formats/graphml';

@@ -6,9 +6,19 @@ import type { Pool } from 'pg';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import { authRoutes } from './auth/auth.routes';
-import { requireSession } from './auth/require-session';
+import { authenticate } from './auth/authenticate';
 import type { Config } from './config';
+import { auditRoutes } from './http/audit/audit.routes';
+import { carvePlanRoutes } from './http/carve-plans/carve-plans.routes';
 import { codebaseRoutes } from './http/codebases/codebases.routes';
+import { pushRoutes } from './http/push/push.routes';
+import { shiftRoutes } from './http/shift/shift.routes';
+import { snapshotRoutes } from './http/snapshots/snapshots.routes';
+import { tokenRoutes } from './http/tokens/tokens.routes';
+import { workspaceRoutes } from './http/workspace/workspace.routes';
+import type { JobSender } from './jobs/job-queue';
+import { CarvePlanService } from './services/carve-plans';
+import { SnapshotCache } from './services/snapshot-cache';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { healthRoutes } from './http/health/health.routes';
 import { meRoutes } from './http/me/me.routes';
@@ -24,7 +34,12 @@ export interface AppDeps {
   /** Pool for the session table (kept apart from TypeORM's so sessions survive its restarts). */
   sessionPool: Pool;
   logger: Logger;
+  /** Where uploads and pushes go to be analysed. */
+  jobs: JobSender;
 }
+
+/** Routes whose body is a file streamed to disk or read as text by the route itself, never parsed as JSON here. */
+const RAW_BODY = /^\/api\/(push|snapshots\/[^/]+\/coverage)(\?|$)/;
 
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(deps: AppDeps): Express {
@@ -79,13 +94,22 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const api = express.Router();
-  api.use(express.json({ limit: '1mb' }));
+  const cache = new SnapshotCache(dataSource);
+  const plans = new CarvePlanService(dataSource, cache);
+  api.use(express.json({ limit: '1mb', type: (req) => !RAW_BODY.test((req as express.Request).originalUrl ?? '') && /\bjson\b/.test(String(req.headers['content-type'] ?? '')) }));
   api.use(express.urlencoded({ extended: false, limit: '2mb' }));
   api.use('/health', healthRoutes(dataSource));
   api.use('/auth', authRoutes({ config, dataSource, logger }));
-  api.use(requireSession(dataSource));
+  api.use(authenticate(dataSource));
   api.use('/me', meRoutes());
-  api.use('/codebases', codebaseRoutes(dataSource));
+  api.use('/workspace', workspaceRoutes(dataSource));
+  api.use('/tokens', tokenRoutes(dataSource));
+  api.use('/audit-events', auditRoutes(dataSource));
+  api.use('/codebases', codebaseRoutes({ dataSource, config, jobs: deps.jobs }));
+  api.use('/push', pushRoutes({ dataSource, config, jobs: deps.jobs }));
+  api.use('/snapshots', snapshotRoutes(dataSource, cache));
+  api.use('/carve-plans', carvePlanRoutes(plans));
+  api.use('/shift', shiftRoutes(dataSource, cache, plans));
   if (config.env !== 'production') api.use('/outbox', outboxRoutes(config.mail.storeDir));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -31,6 +31,12 @@ const schema = z.object({
   SEAMLINE_MAIL_FROM: z.string().default('Seamline <seamline@otterbay.example>'),
   SEAMLINE_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEAMLINE_DEMO_WORKSPACE: z.string().min(1).default('otterbay'),
+  SEAMLINE_UPLOAD_MAX_MB: z.coerce.number().int().min(1).max(10_000).default(200),
+  SEAMLINE_JOB_TIMEOUT_SECONDS: z.coerce.number().int().min(10).max(86_400).default(1800),
+  SEAMLINE_JOB_MEMORY_MB: z.coerce.number().int().min(128).max(65_536).default(4096),
+  SEAMLINE_JOB_RETRIES: z.coerce.number().int().min(0).max(10).default(2),
+  SEAMLINE_JOB_STALE_SECONDS: z.coerce.number().int().min(5).max(3600).default(30),
+  SEAMLINE_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
 });
 
 export interface Config {
@@ -57,6 +63,23 @@ export interface Config {
   mail: { host: string; port: number; from: string; storeDir: string };
   logLevel: string;
   demoWorkspaceSlug: string;
+  /** Uploaded zips and pushed snapshots wait here until a worker takes them. */
+  inboxDir: string;
+  /** Where workers extract uploads while they analyse them. */
+  workDir: string;
+  uploadMaxBytes: number;
+  jobs: {
+    /** A job running longer than this is stopped and fails with that reason. */
+    timeoutSeconds: number;
+    /** Heap limit of the thread that analyses a job. */
+    memoryMb: number;
+    /** Retries after a crash or a worker that stopped answering. */
+    retries: number;
+    /** A running job whose worker has not beaten its heart for this long is handed to another worker. */
+    staleSeconds: number;
+    /** Jobs one worker process runs at once. */
+    concurrency: number;
+  };
 }
 
 /** Thrown when the environment does not describe a runnable server. */
@@ -102,6 +125,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     mail: { host: e.SEAMLINE_SMTP_HOST, port: e.SEAMLINE_SMTP_PORT, from: e.SEAMLINE_MAIL_FROM, storeDir: path.join(dataDir, 'mail') },
     logLevel: e.SEAMLINE_LOG_LEVEL,
     demoWorkspaceSlug: e.SEAMLINE_DEMO_WORKSPACE,
+    inboxDir: path.join(dataDir, 'inbox'),
+    workDir: path.join(dataDir, 'work'),
+    uploadMaxBytes: e.SEAMLINE_UPLOAD_MAX_MB * 1024 * 1024,
+    jobs: {
+      timeoutSeconds: e.SEAMLINE_JOB_TIMEOUT_SECONDS,
+      memoryMb: e.SEAMLINE_JOB_MEMORY_MB,
+      retries: e.SEAMLINE_JOB_RETRIES,
+      staleSeconds: e.SEAMLINE_JOB_STALE_SECONDS,
+      concurrency: e.SEAMLINE_WORKER_CONCURRENCY,
+    },
   };
 }
 

@@ -4,6 +4,7 @@ import { Pool } from 'pg';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { createDataSource } from './db/data-source';
+import { jobSender, startJobQueue } from './jobs/job-queue';
 import { createLogger } from './logger';
 import { onShutdown } from './process/shutdown';
 
@@ -13,7 +14,8 @@ async function main(): Promise<void> {
   const logger = createLogger('api', config.logLevel);
   const dataSource = await createDataSource(config.databaseUrl).initialize();
   const sessionPool = new Pool({ connectionString: config.databaseUrl, max: 5 });
-  const app = createApp({ config, dataSource, sessionPool, logger });
+  const boss = await startJobQueue(config.databaseUrl, (err) => logger.error({ err }, 'job queue error'));
+  const app = createApp({ config, dataSource, sessionPool, logger, jobs: jobSender(boss, config.jobs) });
   const server: Server = app.listen(config.apiPort, config.host, () => {
     logger.info({ url: config.publicUrl }, 'api listening');
   });
@@ -23,6 +25,7 @@ async function main(): Promise<void> {
   });
   onShutdown(logger, async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
+    await boss.stop({ graceful: false, wait: true, timeout: 3000 });
     await sessionPool.end();
     await dataSource.destroy();
   });

@@ -1,3 +1,4 @@
+import { inlineJobs } from '../testing/inline-jobs';
 import type { Express } from 'express';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
@@ -48,7 +49,7 @@ export async function openSamlHarness(options: { env?: Record<string, string>; l
     ...options.env,
   });
   const logger = options.logger ?? createLogger('test', process.env['SEAMLINE_TEST_LOG_LEVEL'] ?? 'silent');
-  const app = createApp({ config, dataSource, sessionPool, logger });
+  const app = createApp({ config, dataSource, sessionPool, logger, jobs: inlineJobs(dataSource, config) });
   const idpApp = createIdentityProviderApp(config, keys, logger);
   return {
     config, app, idpApp, keys, dataSource, workspace, tempDir,

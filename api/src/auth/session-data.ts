@@ -5,14 +5,20 @@ declare module 'express-session' {
   interface SessionData {
     userId?: string;
     workspaceId?: string;
+    /** The token cookie-authenticated changes must echo in X-XSRF-TOKEN. */
+    csrfToken?: string;
   }
 }
 
-/** The signed-in person as every authenticated handler sees it. */
+/**
+ * Who is calling, as every authenticated handler sees it: a signed-in member, or a workspace API
+ * token (then `user` is the token's creator when known, `tokenId` is set, and the policy limits it).
+ */
 export interface Viewer {
-  user: User;
+  user: User | null;
   workspace: Workspace;
   role: Membership['role'];
+  tokenId?: string;
 }
 
 declare global {

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { Codebase } from '../db/entities';
-import type { SnapshotStatus, SnapshotTotals } from '../db/entities';
+import { toSnapshotSummary, type SnapshotSummary } from './snapshot-summary';
 
 /** One row of the Overview: a codebase and its snapshots, newest first. */
 export interface CodebaseSummary {
@@ -9,18 +9,6 @@ export interface CodebaseSummary {
   description: string;
   createdAt: string;
   snapshots: SnapshotSummary[];
-}
-
-export interface SnapshotSummary {
-  id: string;
-  status: SnapshotStatus;
-  progress: number;
-  error: string | null;
-  commit: string | null;
-  branch: string | null;
-  createdAt: string;
-  finishedAt: string | null;
-  totals: SnapshotTotals | null;
 }
 
 /** Lists a workspace's codebases (by name) with their snapshots (newest first). */
@@ -35,16 +23,6 @@ export async function listCodebases(dataSource: DataSource, workspaceId: string)
     name: c.name,
     description: c.description,
     createdAt: c.createdAt.toISOString(),
-    snapshots: (c.snapshots ?? []).map((s) => ({
-      id: s.id,
-      status: s.status,
-      progress: s.progress,
-      error: s.error,
-      commit: s.commit,
-      branch: s.branch,
-      createdAt: s.createdAt.toISOString(),
-      finishedAt: s.finishedAt?.toISOString() ?? null,
-      totals: s.totals,
-    })),
+    snapshots: (c.snapshots ?? []).map(toSnapshotSummary),
   }));
 }

@@ -4,6 +4,7 @@ import type { DataSource } from 'typeorm';
 import { createApp } from '../app';
 import type { Config } from '../config';
 import { createLogger } from '../logger';
+import { inlineJobs, type InlineJobs } from './inline-jobs';
 import { openTestDataSource, openTestSessionPool, testConfig } from './test-database';
 
 /** The real app on the real test database, for supertest. */
@@ -12,6 +13,8 @@ export interface TestApp {
   dataSource: DataSource;
   sessionPool: Pool;
   config: Config;
+  /** Jobs the app sent; they run in this process through the real job handler. */
+  jobs: InlineJobs;
   close(): Promise<void>;
 }
 
@@ -20,13 +23,16 @@ export async function openTestApp(env: Record<string, string> = {}): Promise<Tes
   const config = testConfig(env);
   const dataSource = await openTestDataSource();
   const sessionPool = openTestSessionPool();
-  const app = createApp({ config, dataSource, sessionPool, logger: createLogger('api-test', 'silent') });
+  const jobs = inlineJobs(dataSource, config);
+  const app = createApp({ config, dataSource, sessionPool, logger: createLogger('api-test', process.env['SEAMLINE_TEST_LOG_LEVEL'] ?? 'silent'), jobs });
   return {
     app,
     dataSource,
     sessionPool,
     config,
+    jobs,
     async close() {
+      await jobs.settled();
       await sessionPool.end();
       await dataSource.destroy();
     },

@@ -23,6 +23,7 @@ export interface SnapshotTotals {
 @Check('CK_snapshot_progress', `"progress" BETWEEN 0 AND 100`)
 @Check('CK_snapshot_source', `"source" IN ('upload', 'push')`)
 @Index('ix_snapshot_codebase_created', ['codebaseId', 'createdAt'])
+@Index('ix_snapshot_status_heartbeat', ['status', 'heartbeatAt'])
 export class Snapshot {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'PK_snapshot' })
   id!: string;
@@ -51,6 +52,13 @@ export class Snapshot {
   /** The uploaded zip or pushed file while the job waits for it; removed once stored or failed. */
   @Column({ name: 'input_file', type: 'text', nullable: true })
   inputFile!: string | null;
+
+  /** The queue job analysing it, and when its worker last said it was alive. */
+  @Column({ name: 'job_id', type: 'uuid', nullable: true })
+  jobId!: string | null;
+
+  @Column({ name: 'heartbeat_at', type: 'timestamptz', nullable: true })
+  heartbeatAt!: Date | null;
 
   /** How many times a worker started on it (a retried job counts again). */
   @Column({ type: 'smallint', default: 0 })

@@ -47,7 +47,10 @@ export class AnalysisData1764720000000 implements MigrationInterface {
     await q.query(`ALTER TABLE "snapshot" ADD "phase" character varying(16)`);
     await q.query(`ALTER TABLE "snapshot" ADD "source" character varying(8) NOT NULL DEFAULT 'upload'`);
     await q.query(`ALTER TABLE "snapshot" ADD "input_file" text`);
+    await q.query(`ALTER TABLE "snapshot" ADD "job_id" uuid`);
+    await q.query(`ALTER TABLE "snapshot" ADD "heartbeat_at" TIMESTAMP WITH TIME ZONE`);
     await q.query(`ALTER TABLE "snapshot" ADD "attempts" smallint NOT NULL DEFAULT '0'`);
+    await q.query(`CREATE INDEX "ix_snapshot_status_heartbeat" ON "snapshot" ("status", "heartbeat_at")`);
     await q.query(`ALTER TABLE "snapshot" ADD "created_by" uuid`);
     await q.query(`ALTER TABLE "snapshot" ADD "root" character varying(255)`);
     await q.query(`ALTER TABLE "snapshot" ADD "generator_version" character varying(32)`);
@@ -127,7 +130,10 @@ export class AnalysisData1764720000000 implements MigrationInterface {
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "generator_version"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "root"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "created_by"`);
+    await q.query(`DROP INDEX "public"."ix_snapshot_status_heartbeat"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "attempts"`);
+    await q.query(`ALTER TABLE "snapshot" DROP COLUMN "heartbeat_at"`);
+    await q.query(`ALTER TABLE "snapshot" DROP COLUMN "job_id"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "input_file"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "source"`);
     await q.query(`ALTER TABLE "snapshot" DROP COLUMN "phase"`);

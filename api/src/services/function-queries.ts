@@ -1,0 +1,92 @@
+import type { DataSource } from 'typeorm';
+import { z } from 'zod';
+import {
+  basisPaths, basisCoverageGap, describePath, essentialComplexity, fromCompactGraph, SEVERITY_BANDS, type CompactGraph,
+} from '../analyzer-lib';
+import { NotFoundError } from '../errors';
+
+/** Columns the functions table may sort by, and the SQL each maps to. */
+const SORTABLE = {
+  cyclomatic: 'cyclomatic', essential: 'essential', decisions: 'decisions', loc: 'loc', name: 'qualified_name', file: 'file',
+  line: 'line', crap: 'crap', untestedPaths: 'untested_paths', coverage: 'outcomes_covered::float / NULLIF(outcomes_total, 0)',
+  designComplexity: 'design_complexity', nodes: 'nodes',
+} as const;
+
+export const functionQuerySchema = z.object({
+  sort: z.enum(Object.keys(SORTABLE) as [keyof typeof SORTABLE, ...(keyof typeof SORTABLE)[]]).default('cyclomatic'),
+  order: z.enum(['asc', 'desc']).default('desc'),
+  q: z.string().trim().max(200).optional(),
+  module: z.string().regex(/^(file|folder|package):/, 'must be a module id such as folder:src/orders').max(1000).optional(),
+  cluster: z.string().max(64).optional(),
+  band: z.enum(SEVERITY_BANDS.map((b) => b.band) as [string, ...string[]]).optional(),
+  overLimit: z.enum(['true', 'false']).transform((v) => v === 'true').optional(),
+  page: z.coerce.number().int().min(1).max(1_000_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(500).default(50),
+}).strict();
+
+export type FunctionQuery = z.infer<typeof functionQuerySchema>;
+
+const ROW_COLUMNS = `function_id AS id, name, qualified_name AS "qualifiedName", kind, file, folder, package, cluster, line, end_line AS "endLine",
+  loc, cyclomatic, cyclomatic_strict AS "cyclomaticStrict", decisions, nodes, edges, essential, design_complexity AS "designComplexity",
+  fingerprint, unresolved_calls AS "unresolvedCalls", external_calls AS "externalCalls", band, over_limit AS "overLimit",
+  outcomes_covered AS "outcomesCovered", outcomes_total AS "outcomesTotal", actual_complexity AS "actualComplexity",
+  untested_paths AS "untestedPaths", crap`;
+
+/** One page of a snapshot's functions, sorted and filtered in the database. */
+export async function listFunctions(dataSource: DataSource, snapshotId: string, query: FunctionQuery) {
+  const where = ['snapshot_id = $1'];
+  const params: unknown[] = [snapshotId];
+  const add = (sql: string, value: unknown) => {
+    params.push(value);
+    where.push(sql.replaceAll('?', `$${params.length}`));
+  };
+  if (query.q) add(`(qualified_name ILIKE ? ESCAPE '\\' OR file ILIKE ? ESCAPE '\\')`, `%${escapeLike(query.q)}%`);
+  if (query.module) {
+    const [level, ...rest] = query.module.split(':');
+    if (level === 'file') add('file = ?', rest.join(':'));
+    else add(`${level === 'folder' ? 'folder' : 'package'} = ?`, query.module);
+  }
+  if (query.cluster) add('cluster = ?', query.cluster);
+  if (query.band) add('band = ?', query.band);
+  if (query.overLimit !== undefined) add('over_limit = ?', query.overLimit);
+  const order = `${SORTABLE[query.sort]} ${query.order.toUpperCase()} NULLS LAST, function_id ASC`;
+  const offset = (query.page - 1) * query.pageSize;
+  const whereSql = where.join(' AND ');
+  const [items, [{ total }]] = await Promise.all([
+    dataSource.query(`SELECT ${ROW_COLUMNS} FROM function_metric WHERE ${whereSql} ORDER BY ${order} LIMIT ${query.pageSize} OFFSET ${offset}`, params),
+    dataSource.query(`SELECT count(*)::int AS total FROM function_metric WHERE ${whereSql}`, params),
+  ]);
+  return { items, total, page: query.page, pageSize: query.pageSize, sort: query.sort, order: query.order };
+}
+
+/**
+ * One function with everything the Flow screen shows: its graph, decisions, V(G) worked out both
+ * ways, the basis paths as a checklist, what keeps ev(G) above 1, and coverage when imported.
+ */
+export async function functionDetail(dataSource: DataSource, snapshotId: string, functionId: string) {
+  const [row] = await dataSource.query(`SELECT ${ROW_COLUMNS} FROM function_metric WHERE snapshot_id = $1 AND function_id = $2`, [snapshotId, functionId]);
+  if (!row) throw new NotFoundError('No such function in this snapshot.');
+  const [detail] = await dataSource.query(`SELECT graph, coverage_outcomes AS "coverageOutcomes", source FROM function_detail WHERE snapshot_id = $1 AND function_id = $2`, [snapshotId, functionId]);
+  const compact = detail.graph as CompactGraph;
+  const graph = fromCompactGraph(compact);
+  const essential = essentialComplexity(graph);
+  const paths = basisPaths(graph).map((p, index) => ({ index, blocks: p.blocks, edges: p.edges, steps: p.steps, description: describePath(graph, p) }));
+  return {
+    function: row,
+    graph: compact,
+    formula: {
+      edges: row.edges, nodes: row.nodes, components: 1, strict: row.cyclomaticStrict,
+      decisions: row.decisions, reported: row.cyclomatic,
+      text: `V(G) = E − N + 2P = ${row.edges} − ${row.nodes} + 2 × 1 = ${row.cyclomaticStrict}; decisions + 1 = ${row.decisions} + 1 = ${row.decisions + 1}`,
+    },
+    essential: { value: row.essential, irreducibleDecisions: essential.irreducibleDecisions },
+    basisPaths: paths,
+    gaps: basisCoverageGap(graph),
+    coverage: detail.coverageOutcomes ? { outcomes: detail.coverageOutcomes, outcomesCovered: row.outcomesCovered, outcomesTotal: row.outcomesTotal, actualComplexity: row.actualComplexity, untestedPaths: row.untestedPaths, crap: row.crap } : null,
+    source: detail.source,
+  };
+}
+
+function escapeLike(text: string): string {
+  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
