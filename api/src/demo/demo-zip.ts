@@ -93,8 +93,17 @@ export async function buildDemoZip(version: DemoVersion, outFile: string): Promi
     });
     fs.renameSync(partial, target);
   } catch (error) {
-    fs.rmSync(partial, { force: true });
+    removeQuietly(partial);
     throw new Error(`Could not write the ${version} demo zip to ${target}: ${(error as Error).message}`);
   }
   return { files: files.length, bytes: fs.statSync(target).size };
+}
+
+/** Cleans up after a failed write; the write's own error is the one worth reporting. */
+function removeQuietly(file: string): void {
+  try {
+    fs.rmSync(file, { force: true });
+  } catch {
+    // nothing was there to remove (e.g. its folder is a file)
+  }
 }
