@@ -9,7 +9,7 @@ import { fail, step } from './lib/log.mjs';
 import { ensureNodeDependencies } from './lib/node-deps.mjs';
 import { LocalPostgres } from './lib/postgres.mjs';
 import { assertPortFree, formatLine, ProcessGroup, waitForHttp, waitForPort } from './lib/processes.mjs';
-import { capture } from './lib/run.mjs';
+import { capture, runAsync } from './lib/run.mjs';
 import { ensureSecret } from './lib/secrets.mjs';
 import { ensureSystemPackages } from './lib/system-packages.mjs';
 
@@ -84,6 +84,10 @@ async function main() {
     waitForHttp(`http://127.0.0.1:${ports.api}/api/health`),
   ]);
   if (!group.allAlive()) throw new Error('a Seamline process stopped during start-up (see its output above)');
+  // Through the same upload → queue → worker pipeline users get; a no-op once the demo has snapshots.
+  step('making sure the invented demo codebase is analysed (two snapshots, coverage, a carve plan)…');
+  const seeded = await runAsync(process.execPath, [path.join(serverDist, 'api/src/demo/seed-main.js')], { env: { ...process.env, ...env, SEAMLINE_LOG_LEVEL: 'warn' } });
+  if (seeded !== 0) step('the demo analyses did not finish (see above); the app runs, the Overview may be empty');
 
   printBanner(Math.round((Date.now() - started) / 1000));
 }
