@@ -11,6 +11,7 @@ import type { Config } from './config';
 import { auditRoutes } from './http/audit/audit.routes';
 import { carvePlanRoutes } from './http/carve-plans/carve-plans.routes';
 import { codebaseRoutes } from './http/codebases/codebases.routes';
+import { docsRoutes } from './http/docs/docs.routes';
 import { pushRoutes } from './http/push/push.routes';
 import { shiftRoutes } from './http/shift/shift.routes';
 import { snapshotRoutes } from './http/snapshots/snapshots.routes';
@@ -100,6 +101,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(express.urlencoded({ extended: false, limit: '2mb' }));
   api.use('/health', healthRoutes(dataSource));
   api.use('/auth', authRoutes({ config, dataSource, logger }));
+  api.use('/docs', docsRoutes());
   api.use(authenticate(dataSource));
   api.use('/me', meRoutes());
   api.use('/workspace', workspaceRoutes(dataSource));
