@@ -19,9 +19,10 @@ export function checkCsrf(req: Request, res: Response): void {
   if (!session.csrfToken) session.csrfToken = randomBytes(24).toString('base64url');
   res.cookie(CSRF_COOKIE, session.csrfToken, { sameSite: 'strict', secure: req.secure, httpOnly: false, path: '/' });
   if (SAFE_METHODS.has(req.method)) return;
-  const sent = req.get(CSRF_HEADER) ?? '';
-  const expected = session.csrfToken;
-  if (sent.length !== expected.length || !timingSafeEqual(Buffer.from(sent), Buffer.from(expected))) {
+  // Compared as bytes: a header of the same length in characters may differ in bytes.
+  const sent = Buffer.from(req.get(CSRF_HEADER) ?? '');
+  const expected = Buffer.from(session.csrfToken);
+  if (sent.length !== expected.length || !timingSafeEqual(sent, expected)) {
     throw new ForbiddenError('This change did not carry the page\'s anti-forgery token (X-XSRF-TOKEN); reload the page and try again.');
   }
 }
