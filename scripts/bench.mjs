@@ -28,13 +28,18 @@ function measure(tasks, rounds) {
   return Object.fromEntries(Object.entries(runs).map(([k, rs]) => [k, { ms: median(rs.map((r) => r.ms)), wall: median(rs.map((r) => r.wallMs)), mb: median(rs.map((r) => r.maxRssKb)) / 1024, last: rs[rs.length - 1] }]));
 }
 
-const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
-if (build.status !== 0) process.exit(1);
-
-// SEAMLINE_BENCH_PART=scan or =map runs one half only.
+// SEAMLINE_BENCH_PART=scan, =map, =store, =api-load, =workers runs one part only; =server the last three.
 const PART = process.env.SEAMLINE_BENCH_PART ?? 'all';
+const SERVER_PARTS = { store: 'server-store.mjs', 'api-load': 'server-api-load.mjs', workers: 'server-workers.mjs' };
+const runs = (part) => PART === 'all' || PART === part || (PART === 'server' && part in SERVER_PARTS);
+if (!['all', 'scan', 'map', 'server', ...Object.keys(SERVER_PARTS)].includes(PART)) throw new Error(`Unknown SEAMLINE_BENCH_PART ${PART}`);
+
+if (runs('scan') || runs('map')) {
+  const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
+  if (build.status !== 0) process.exit(1);
+}
 console.log(`Seamline benchmarks — ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0].model}, ${Math.round(os.totalmem() / 2 ** 30)} GiB, node ${process.version}, ${ROUNDS} rounds (medians)\n`);
-if (PART !== 'map') {
+if (runs('scan')) {
 const rx = measure({ parse: () => task('parse.cjs'), scan: () => task('scan.cjs'), eslint: () => task('eslint.cjs') }, ROUNDS);
 console.log(`rxjs@7.8.2 src: ${rx.scan.last.files} files, ${rx.scan.last.functions} functions`);
 console.log('| task | median time after start-up (ms) | median whole process (ms) | peak memory (MB) |');
@@ -64,7 +69,7 @@ console.log(`| seamline scan --no-calls (${large.scan.last.functions} functions)
 }
 
 // Issue 4: the call graph against its floor, on rxjs and on the JavaScript typeorm ships.
-if (PART !== 'scan') {
+if (runs('map')) {
 const callRounds = Math.max(1, Math.min(5, ROUNDS));
 console.log('\nCall graph against creating the program and checker and resolving every call signature (same files, same options):');
 console.log('| corpus | floor (ms) | call graph (ms) | ratio | target | met | call graph peak memory (MB) |');
@@ -91,4 +96,17 @@ console.log(`| Seamline: clusterModules + rankGravity (merging edges and buildin
 console.log(`ratio to Louvain alone ${r(lv.ratio)}, to build + Louvain ${r(lv.ratioWithBuild)}; recorded target under 3,000 ms: ${lv.oursMs < 3000 ? 'met' : 'not met'}; peak ${f(lv.maxRssKb / 1024)} MB`);
 const cv = lastJson('carve.cjs');
 console.log(`\nCarve-plan evaluation on 5,000 modules: prepare ${f(cv.prepareMs)} ms once; evaluate median ${f(cv.ms)} ms over ${cv.edits} edits (first ${f(cv.coldEvaluateMs)} ms); target under 100 ms: ${cv.under100ms ? 'met' : 'not met'}`);
+}
+
+// The server: storing a snapshot, reads under load, analysis throughput per worker count. Each
+// part starts its own PostgreSQL cluster and processes and stops them, whatever happens.
+const serverParts = Object.keys(SERVER_PARTS).filter(runs);
+if (serverParts.length > 0) {
+  const { buildBenchServer } = await import('./bench/server-harness.mjs');
+  buildBenchServer();
+  for (const part of serverParts) {
+    console.log(`\n${part}:`);
+    const run = spawnSync(process.execPath, [path.join(root, 'scripts/bench', SERVER_PARTS[part])], { cwd: root, stdio: 'inherit' });
+    if (run.status !== 0) throw new Error(`the ${part} benchmark failed (exit ${run.status ?? run.signal})`);
+  }
 }
