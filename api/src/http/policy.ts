@@ -15,6 +15,7 @@ export const POLICY = {
   'audit.read': ['owner'],
   'codebase.read': ['owner', 'architect', 'reviewer', 'viewer'],
   'codebase.write': ['owner', 'architect'],
+  'snapshot.status': ['owner', 'architect', 'reviewer', 'viewer'],
   'snapshot.read': ['owner', 'architect', 'reviewer', 'viewer'],
   'snapshot.upload': ['owner', 'architect'],
   'snapshot.push': ['owner', 'architect'],
@@ -27,8 +28,11 @@ export const POLICY = {
 
 export type Action = keyof typeof POLICY;
 
-/** What a workspace API token may do: push snapshots and follow them. Nothing else. */
-export const TOKEN_ACTIONS: readonly Action[] = ['snapshot.push', 'snapshot.read'];
+/**
+ * What a workspace API token may do: push snapshots and follow their status. Nothing else — a
+ * leaked CI token must not read a codebase's analysis.
+ */
+export const TOKEN_ACTIONS: readonly Action[] = ['snapshot.push', 'snapshot.status'];
 
 /** Lets the request through when its principal may perform `action`. */
 export function allow(action: Action) {

@@ -29,7 +29,7 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
   const router = Router();
   const ready = async (req: import('express').Request) => readySnapshot(dataSource, viewerOf(req).workspace.id, validate(idParams, req.params, 'params').id);
 
-  router.get('/:id', allow('snapshot.read'), async (req, res) => {
+  router.get('/:id', allow('snapshot.status'), async (req, res) => {
     const s = await snapshotInWorkspace(dataSource, viewerOf(req).workspace.id, validate(idParams, req.params, 'params').id);
     res.json({ snapshot: { ...toSnapshotSummary(s), skipped: s.skipped, externals: s.externals, mapSettings: s.mapSettings } });
   });
@@ -44,7 +44,7 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
     cache.forget(s.id);
     res.status(204).end();
   });
-  router.get('/:id/events', allow('snapshot.read'), async (req, res) => {
+  router.get('/:id/events', allow('snapshot.status'), async (req, res) => {
     const s = await snapshotInWorkspace(dataSource, viewerOf(req).workspace.id, validate(idParams, req.params, 'params').id);
     streamSnapshotEvents(dataSource, s.id, req, res);
   });
