@@ -25,7 +25,8 @@ export async function analyseInput(request: AnalysisRequest, onProgress: (p: Ana
     const summary = await extractZip(request.inputFile, request.workDir, request.uploadLimits);
     // A zip of one folder scans that folder, so the snapshot's root is the codebase's own name.
     const root = summary.topFolder ? path.join(request.workDir, summary.topFolder) : request.workDir;
-    const snapshot = await scanDirectory(root, { settings: request.settings }, (p) => {
+    // The server keeps uploaded code: each function's text goes with it, so Flow can show it.
+    const snapshot = await scanDirectory(root, { settings: request.settings, embedSource: true }, (p) => {
       if (p.phase === 'discover') onProgress({ phase: 'discover', percent: ANALYSE_FROM });
       else if (p.phase === 'analyse') onProgress({ phase: 'analyse', percent: Math.floor(ANALYSE_FROM + ((ANALYSE_TO - ANALYSE_FROM) * p.done) / Math.max(1, p.total)) });
       else onProgress({ phase: 'calls', percent: CALLS_AT });

@@ -59,6 +59,8 @@ describe('an analysis through the API', () => {
     expect(res.body.basisPaths).toHaveLength(f.cyclomatic);
     expect(res.body.formula.text).toContain(`= ${f.cyclomaticStrict}`);
     expect(res.body.graph.decisions).toHaveLength(f.decisions);
+    // Uploaded code is kept with each function, so the Flow screen can show it.
+    expect(res.body.source).toContain('function total(');
   });
 
   it('should serve the module graph, gravity and a carve plan from the clusters', async () => {
