@@ -30,11 +30,27 @@ export interface MeResponse {
 /** Where a snapshot's analysis stands. */
 export type SnapshotStatus = 'queued' | 'running' | 'ready' | 'failed';
 
-/** Whole-snapshot sums; null until the analysis is ready. */
+/** Whole-snapshot sums; null until the analysis is ready (the optional ones need the call graph). */
 export interface SnapshotTotals {
   functions: number;
   cyclomatic: number;
   decisions: number;
+  files?: number;
+  cyclomaticStrict?: number;
+  overLimit?: number;
+  loc?: number;
+  modularity?: number;
+  designComplexity?: number;
+  integrationComplexity?: number;
+}
+
+/** The counting settings an analysis used (see docs/metrics.md). */
+export interface CountingSettings {
+  switch: 'cases' | 'one';
+  optionalChaining: boolean;
+  defaultValues: boolean;
+  /** V(G) above this is over the limit (10 by default). */
+  limit: number;
 }
 
 /** One analysed (or queued) version of a codebase. */
@@ -48,6 +64,23 @@ export interface Snapshot {
   createdAt: string;
   finishedAt: string | null;
   totals: SnapshotTotals | null;
+  /** The fields below come with every snapshot the server sends; optional for older test data. */
+  codebaseId?: string;
+  /** What the analysis is doing while it runs (`extract`, `analyse`, `calls`, `store`…). */
+  phase?: string | null;
+  source?: 'upload' | 'push';
+  attempts?: number;
+  settings?: Partial<CountingSettings>;
+  root?: string | null;
+  filesScanned?: number | null;
+  skippedFiles?: number | null;
+  /** False for a snapshot made without the call graph: no modules, clusters or gravity. */
+  hasModuleMap?: boolean;
+}
+
+/** `GET /api/snapshots/:id` → 200. */
+export interface SnapshotResponse {
+  snapshot: Snapshot;
 }
 
 /** A codebase with its snapshots, newest first. */

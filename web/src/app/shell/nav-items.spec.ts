@@ -1,4 +1,4 @@
-import { NAV_ITEMS, NavItem, visibleNavItems } from './nav-items';
+import { NAV_ITEMS, NavItem, navLinks, visibleNavItems } from './nav-items';
 
 describe('visibleNavItems', () => {
   const items: NavItem[] = [
@@ -15,7 +15,22 @@ describe('visibleNavItems', () => {
     expect(visibleNavItems(items, null)).toEqual([]);
   });
 
-  it('should list only screens that exist today', () => {
-    expect(NAV_ITEMS.map((item) => item.label)).toEqual(['Overview']);
+  it('should list the Overview first', () => {
+    expect(NAV_ITEMS[0]).toMatchObject({ path: '/overview', label: 'Overview' });
+  });
+});
+
+describe('navLinks', () => {
+  const items: NavItem[] = [
+    { path: '/overview', label: 'Overview', icon: 'dashboard', roles: ['viewer'] },
+    { snapshotScreen: 'functions', label: 'Functions', icon: 'functions', roles: ['viewer'] },
+  ];
+
+  it('should link snapshot screens to the snapshot in view', () => {
+    expect(navLinks(items, 's 1').map((i) => i.link)).toEqual(['/overview', '/snapshots/s%201/functions']);
+  });
+
+  it('should leave snapshot screens without a link while no snapshot is chosen', () => {
+    expect(navLinks(items, null).map((i) => i.link)).toEqual(['/overview', null]);
   });
 });

@@ -12,7 +12,8 @@ import { map } from 'rxjs';
 
 import { apiErrorMessage } from '../api-error-message';
 import { SessionStore } from '../auth/session-store';
-import { NAV_ITEMS, visibleNavItems } from './nav-items';
+import { CurrentSnapshot } from '../snapshot/current-snapshot';
+import { NAV_ITEMS, navLinks, visibleNavItems } from './nav-items';
 
 /** Width from which the navigation stays open beside the content. */
 const WIDE_LAYOUT = '(min-width: 1280px)';
@@ -53,7 +54,8 @@ export class Shell {
   /** The person's role. */
   protected readonly role = this.session.role;
   /** Navigation entries the person's role may open. */
-  protected readonly navItems = computed(() => visibleNavItems(NAV_ITEMS, this.role()));
+  protected readonly navItems = computed(() => navLinks(visibleNavItems(NAV_ITEMS, this.role()), this.currentSnapshot.id()));
+  private readonly currentSnapshot = inject(CurrentSnapshot);
   /** Whether a sign-out request is on its way. */
   protected readonly isSigningOut = signal(false);
 
