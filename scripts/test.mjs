@@ -63,6 +63,9 @@ async function main() {
     waitForPort(ports.smtp),
     waitForHttp(`http://127.0.0.1:${ports.api}/api/health`),
   ]);
+  // The screens' end-to-end tests explore the invented demo, analysed as npm start does it.
+  const seeded = await runAsync(process.execPath, [path.join(serverDist, 'api/src/demo/seed-main.js')], { env: { ...process.env, ...env, SEAMLINE_LOG_LEVEL: 'warn' } });
+  if (seeded !== 0) throw new Error('the invented demo could not be analysed for the end-to-end tests (see the worker log)');
   step(`stack ready in ${Math.round((Date.now() - started) / 1000)} s (logs in ${path.relative(root, e2eData)}/logs); running jest…`);
 
   const results = path.join(testDir, 'jest-results.json');
