@@ -1,6 +1,8 @@
 import { Routes } from '@angular/router';
 
+import { ALL_ROLES } from './api-types';
 import { redirectSignedIn } from './auth/redirect-signed-in';
+import { requireRole } from './auth/require-role';
 import { requireSession } from './auth/require-session';
 
 /** Top-level routes: the public sign-in page and the signed-in shell with its screens. */
@@ -21,6 +23,12 @@ export const routes: Routes = [
         path: 'overview',
         title: 'Overview · Seamline',
         loadComponent: () => import('./overview/overview').then((m) => m.Overview),
+      },
+      {
+        path: 'snapshots/:snapshotId/functions',
+        title: 'Functions · Seamline',
+        canActivate: [requireRole(...ALL_ROLES)],
+        loadComponent: () => import('./functions/functions').then((m) => m.Functions),
       },
     ],
   },
