@@ -30,6 +30,12 @@ export const routes: Routes = [
         canActivate: [requireRole(...ALL_ROLES)],
         loadComponent: () => import('./functions/functions').then((m) => m.Functions),
       },
+      {
+        path: 'snapshots/:snapshotId/gravity',
+        title: 'Gravity · Seamline',
+        canActivate: [requireRole(...ALL_ROLES)],
+        loadComponent: () => import('./gravity/gravity').then((m) => m.Gravity),
+      },
     ],
   },
   { path: '**', redirectTo: 'overview' },

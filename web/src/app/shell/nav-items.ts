@@ -28,6 +28,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { path: '/overview', label: 'Overview', icon: 'dashboard', roles: ALL_ROLES },
   // — snapshot screens: one entry each below —
   { snapshotScreen: 'functions', label: 'Functions', icon: 'functions', roles: ALL_ROLES },
+  { snapshotScreen: 'gravity', label: 'Gravity', icon: 'orbit', roles: ALL_ROLES },
 ];
 
 /** The entries a person with `role` may open; none without a role. */

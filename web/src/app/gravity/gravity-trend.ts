@@ -1,0 +1,110 @@
+import type { GravityTrendPoint } from './gravity-types';
+
+/** Size of a sparkline in SVG units, and the room kept free around the line. */
+export interface SparklineBox {
+  width: number;
+  height: number;
+  padding: number;
+}
+
+/** One plotted snapshot: where it sits and what it shows. */
+export interface SparklinePoint {
+  x: number;
+  y: number;
+  gravity: number;
+  /** Whether this is the snapshot in view (the last point). */
+  isCurrent: boolean;
+}
+
+/** What to draw: one SVG path per run of snapshots that have the module, and a dot per value. */
+export interface SparklineGeometry {
+  /** `d` attributes; a snapshot without the module breaks the line. */
+  paths: string[];
+  points: SparklinePoint[];
+  /** y of gravity 0 and of gravity 100, for the frame. */
+  baseline: number;
+  top: number;
+}
+
+/** The default sparkline size. */
+export const SPARKLINE_BOX: SparklineBox = { width: 96, height: 28, padding: 3 };
+
+/**
+ * Places a trend on a fixed 0–100 scale (so a small change looks small), snapshots evenly
+ * spaced from left (oldest) to right (the snapshot in view). Needs at least two snapshots.
+ */
+export function sparklineGeometry(trend: readonly GravityTrendPoint[], box: SparklineBox = SPARKLINE_BOX): SparklineGeometry {
+  const { width, height, padding } = box;
+  const baseline = height - padding;
+  const top = padding;
+  const step = trend.length > 1 ? (width - 2 * padding) / (trend.length - 1) : 0;
+  const points: SparklinePoint[] = [];
+  const paths: string[] = [];
+  let run: string[] = [];
+  const closeRun = () => {
+    if (run.length > 1) paths.push(run.join(' '));
+    run = [];
+  };
+  trend.forEach((entry, index) => {
+    if (entry.gravity === null) {
+      closeRun();
+      return;
+    }
+    const value = Math.min(100, Math.max(0, entry.gravity));
+    const x = round(padding + index * step);
+    const y = round(baseline - (value / 100) * (baseline - top));
+    points.push({ x, y, gravity: entry.gravity, isCurrent: index === trend.length - 1 });
+    run.push(`${run.length === 0 ? 'M' : 'L'}${x},${y}`);
+  });
+  closeRun();
+  return { paths, points, baseline, top };
+}
+
+/**
+ * The trend in one sentence for screen readers and tooltips, or null when there is nothing to
+ * compare (a single snapshot). Compares the earliest snapshot that has the module with this one.
+ */
+export function describeTrend(trend: readonly GravityTrendPoint[]): string | null {
+  if (trend.length < 2) return null;
+  const present = trend.filter((entry): entry is GravityTrendPoint & { gravity: number } => entry.gravity !== null);
+  const current = trend[trend.length - 1].gravity;
+  const earlier = trend.length - 1;
+  const missing = trend.slice(0, -1).filter((entry) => entry.gravity === null).length;
+  if (current === null) return null;
+  if (present.length === 1) {
+    return `Gravity ${format(current)}; the module is not in the ${plural(earlier, 'earlier snapshot')}`;
+  }
+  const first = present[0].gravity;
+  const delta = round1(current - first);
+  const absent = missing > 0 ? `, absent from ${missing} of them` : '';
+  const span = `over ${plural(trend.length, 'snapshot')}${absent}`;
+  if (delta === 0) return `Gravity unchanged at ${format(current)} ${span}`;
+  return `Gravity ${delta > 0 ? 'rose' : 'fell'} from ${format(first)} to ${format(current)} ${span}`;
+}
+
+/** The change since the earliest snapshot with the module, as a short signed figure ("+3.9"), or "new". */
+export function trendChange(trend: readonly GravityTrendPoint[]): string | null {
+  if (trend.length < 2) return null;
+  const current = trend[trend.length - 1].gravity;
+  const first = trend.find((entry) => entry.gravity !== null)?.gravity ?? null;
+  if (current === null || first === null) return null;
+  if (trend.slice(0, -1).every((entry) => entry.gravity === null)) return 'new';
+  const delta = round1(current - first);
+  return delta === 0 ? '±0' : `${delta > 0 ? '+' : '−'}${format(Math.abs(delta))}`;
+}
+
+function format(value: number): string {
+  return round1(value).toLocaleString('en-GB', { maximumFractionDigits: 1 });
+}
+
+function plural(count: number, noun: string): string {
+  return `${count} ${noun}${count === 1 ? '' : 's'}`;
+}
+
+function round1(value: number): number {
+  return Math.round(value * 10) / 10;
+}
+
+function round(value: number): number {
+  return Math.round(value * 100) / 100;
+}
