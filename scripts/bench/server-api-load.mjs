@@ -9,7 +9,7 @@
 import { createRequire } from 'node:module';
 import * as os from 'node:os';
 import {
-  createCodebase, demoZip, LOAD_SECONDS, ownerSession, progress, queuedSnapshot, runPart, serverModule, sleep, untilFinished, uploadZip,
+  createCodebase, demoZip, LOAD_SECONDS, machineCpu, ownerSession, processCpuMs, progress, queuedSnapshot, runPart, serverModule, sleep, untilFinished, uploadZip,
 } from './server-harness.mjs';
 import { loadPaths } from './server-load.mjs';
 
@@ -99,7 +99,7 @@ await runPart('api-load', async (stack) => {
   // Statistics as autovacuum would gather them shortly after a real store.
   await dataSource.query('ANALYZE');
 
-  const { base } = await stack.startApi(url);
+  const { base, child: api } = await stack.startApi(url);
   stack.startWorker(url, 0);
   const headers = { Cookie: session.headers.Cookie };
   const functionsPaths = functionPaths(row.id, bands);
@@ -121,7 +121,12 @@ await runPart('api-load', async (stack) => {
   const runs = {};
   const load = async (name, paths) => {
     progress(`${name}: ${CONNECTIONS} connections for ${LOAD_SECONDS} s…`);
+    const machineBefore = machineCpu();
+    const apiBefore = processCpuMs(api.pid);
     runs[name] = await loadPaths({ base, headers, paths, seconds: LOAD_SECONDS, connections: CONNECTIONS });
+    const machineAfter = machineCpu();
+    runs[name].apiCpuShare = (processCpuMs(api.pid) - apiBefore) / (machineAfter.totalMs - machineBefore.totalMs);
+    runs[name].machineBusy = (machineAfter.busyMs - machineBefore.busyMs) / (machineAfter.totalMs - machineBefore.totalMs);
     if (!stack.allAlive()) throw new Error(`a server process died during ${name} (logs in ${stack.dataDir}/logs)`);
   };
   const loadBefore = os.loadavg()[0];
@@ -142,15 +147,16 @@ await runPart('api-load', async (stack) => {
     loadAverage: { before: loadBefore, after: os.loadavg()[0] },
   };
   const f = (x) => Math.round(x).toLocaleString('en');
+  const pct = (x) => `${Math.round(100 * x)} %`;
   const target = (name) => (name.startsWith('functions') ? TARGETS.functions : TARGETS.moduleGraph);
   const lines = [
     `Reads under load: ${CONNECTIONS} connections for ${LOAD_SECONDS} s per row, loopback; a stored snapshot of ${f(shape.functions)} functions and ${f(shape.folders)} folder modules (${f(shape.folderEdges)} folder edges; the module graph answer is ${f(figures.graphKb)} kB):`,
-    '| endpoint, server state | requests | requests/s | p50 (ms) | p95 (ms) | p99 (ms) | max (ms) | errors | p95 target | met |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- |',
-    ...Object.entries(runs).map(([name, r]) => `| ${name} | ${f(r.requests)} | ${r.perSecond.toFixed(1)} | ${f(r.p50)} | ${f(r.p95)} | ${f(r.p99)} | ${f(r.max)} | ${r.errors} | < ${target(name)} ms | ${r.p95 < target(name) ? 'yes' : 'no'} |`),
+    '| endpoint, server state | requests | requests/s | p50 (ms) | p95 (ms) | p99 (ms) | max (ms) | errors | p95 target | met | machine busy | of it the API |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: |',
+    ...Object.entries(runs).map(([name, r]) => `| ${name} | ${f(r.requests)} | ${r.perSecond.toFixed(1)} | ${f(r.p50)} | ${f(r.p95)} | ${f(r.p99)} | ${f(r.max)} | ${r.errors} | < ${target(name)} ms | ${r.p95 < target(name) ? 'yes' : 'no'} | ${pct(r.machineBusy)} | ${pct(r.apiCpuShare)} |`),
     '',
     `demo analysis (otterbay before, ${f(figures.analyses.underLoadMs.length)} run under load): ${(quiet.runMs / 1000).toFixed(1)} s alone, ${figures.analyses.underLoadMs.map((ms) => (ms / 1000).toFixed(1)).join(' s, ')} s under the readers`,
-    `1-minute load average ${loadBefore.toFixed(1)} before the load runs, ${figures.loadAverage.after.toFixed(1)} after (2 cores; autocannon runs on the same machine)`,
+    `machine busy: share of both cores' time used by any process during the row; "of it the API": the API process's share (autocannon, the worker, PostgreSQL and other work on the machine are the rest). 1-minute load average ${loadBefore.toFixed(1)} before the load runs, ${figures.loadAverage.after.toFixed(1)} after`,
   ];
   return { figures, text: lines.join('\n') };
 });

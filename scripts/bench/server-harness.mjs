@@ -236,5 +236,21 @@ export async function createCodebase(base, headers, name) {
   return body.codebase.id;
 }
 
+/** The whole machine's CPU time so far (/proc/stat, in ms of all cores): busy and total. */
+export function machineCpu() {
+  const fields = fs.readFileSync('/proc/stat', 'utf8').split('\n')[0].trim().split(/\s+/).slice(1).map(Number);
+  const tick = 1000 / 100; // USER_HZ is 100 on Linux
+  const idle = fields[3] + fields[4];
+  const total = fields.reduce((a, b) => a + b, 0);
+  return { busyMs: (total - idle) * tick, totalMs: total * tick };
+}
+
+/** CPU time (user + system, ms) a running process has used, its threads included. */
+export function processCpuMs(pid) {
+  const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+  const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+  return (Number(fields[11]) + Number(fields[12])) * 10;
+}
+
 export const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 export const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));

@@ -7,7 +7,7 @@
 import { createRequire } from 'node:module';
 import * as os from 'node:os';
 import { PerformanceObserver } from 'node:perf_hooks';
-import { median, progress, queuedSnapshot, runPart, serverModule } from './server-harness.mjs';
+import { machineCpu, median, progress, queuedSnapshot, runPart, serverModule } from './server-harness.mjs';
 
 const require = createRequire(import.meta.url);
 const { generateSnapshot, moduleCount, SIZES } = require('./synthetic-snapshot.cjs');
@@ -49,13 +49,16 @@ await runPart('store', async (stack) => {
       await dataSource.query('CHECKPOINT');
       gcMs = 0;
       const cpu = process.cpuUsage();
+      const machine = machineCpu();
       const started = process.hrtime.bigint();
       const stored = await storeSnapshot(dataSource, row.id, snapshot);
       const ms = Number(process.hrtime.bigint() - started) / 1e6;
       const used = process.cpuUsage(cpu);
+      const machineAfter = machineCpu();
+      const machineBusy = (machineAfter.busyMs - machine.busyMs) / (machineAfter.totalMs - machine.totalMs);
       if (!stored) throw new Error('storeSnapshot reported nothing to do on a queued snapshot');
       times[name].push(ms);
-      client[name].push({ cpuMs: (used.user + used.system) / 1000, gcMs });
+      client[name].push({ cpuMs: (used.user + used.system) / 1000, gcMs, machineBusy });
       progress(`round ${round}: ${name} (${snapshot.functions.length.toLocaleString('en')} functions) stored in ${(ms / 1000).toFixed(2)} s`);
       if (name === 'full' && round === ROUNDS) {
         for (const table of TABLES) {
@@ -92,7 +95,7 @@ await runPart('store', async (stack) => {
     '',
     `ratio target / tenth: ${figures.ratio.toFixed(2)} (10 = linear); recorded target under 15 s: ${fullMs < 15_000 ? 'met' : 'not met'}; bench process peak ${n(figures.maxRssMb)} MB`,
     `of the target size's ${(fullMs / 1000).toFixed(1)} s, this process (building the parameters, JSON of the graphs) used ${(fullClient.cpuMs / 1000).toFixed(1)} s of CPU, ${(fullClient.gcMs / 1000).toFixed(1)} s of it collecting garbage; the rest is waiting on PostgreSQL`,
-    `1-minute load average ${figures.loadAverage.before.toFixed(1)} before, ${figures.loadAverage.after.toFixed(1)} after (2 cores: other work on the machine shows here)`,
+    `both cores were ${Math.round(100 * fullClient.machineBusy)} % busy during that store (this process, PostgreSQL and any other work on the machine); 1-minute load average ${figures.loadAverage.before.toFixed(1)} before the part, ${figures.loadAverage.after.toFixed(1)} after`,
     `stored size: ${Object.entries(storage).map(([t, s]) => `${t} ${n(s.rows)} rows ${n(s.mb)} MB`).join(', ')}`,
   ];
   return { figures, text: lines.join('\n') };
