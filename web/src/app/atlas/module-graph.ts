@@ -1,0 +1,82 @@
+/** Shapes of `GET /api/snapshots/:id/module-graph` (docs/openapi.yaml: ModuleGraph, Module). */
+
+/** The three module levels of the map. */
+export type ModuleLevel = 'file' | 'folder' | 'package';
+
+/** Every level, finest first (the order of the level switch). */
+export const MODULE_LEVELS: readonly ModuleLevel[] = ['file', 'folder', 'package'];
+
+/** The level the map opens on when the URL names none (the API's default too). */
+export const DEFAULT_LEVEL: ModuleLevel = 'folder';
+
+/** One module's figures. */
+export interface ModuleRecord {
+  id: string;
+  level?: ModuleLevel;
+  path: string;
+  name: string | null;
+  /** P: functions (connected components). */
+  functions: number;
+  /** ΣV. */
+  cyclomatic: number;
+  /** Σπ. */
+  decisions: number;
+  /** The largest V(G) of one function in the module. */
+  maxCyclomatic: number;
+  overLimit?: number;
+  lines?: number;
+  fanIn: number;
+  fanOut: number;
+  ca?: number;
+  ce?: number;
+  /** I = Ce/(Ca+Ce); null without couplings. */
+  instability: number | null;
+  /** S0. */
+  designComplexity: number;
+  /** S1 = S0 − n + 1. */
+  integrationComplexity: number;
+  unresolvedCalls?: number;
+  externalCalls?: number;
+  cluster: string | null;
+  gravity: number;
+  gravityRank: number;
+  reasons: string[];
+}
+
+/** A weighted link between two modules: call sites plus imports. */
+export interface ModuleEdge {
+  from: string;
+  to: string;
+  weight: number;
+  calls: number;
+  imports: number;
+}
+
+/** One Louvain cluster with its sums. */
+export interface ModuleCluster {
+  id: string;
+  members: string[];
+  functions: number;
+  cyclomatic: number;
+  decisions: number;
+  internalWeight: number;
+  externalWeight: number;
+}
+
+/** `GET /api/snapshots/:id/module-graph` → 200. */
+export interface ModuleGraph {
+  level: ModuleLevel;
+  nodes: ModuleRecord[];
+  edges: ModuleEdge[];
+  clusters: ModuleCluster[];
+}
+
+/** The level named in a URL, or the default one for anything else. */
+export function parseLevel(value: string | null | undefined): ModuleLevel {
+  return MODULE_LEVELS.includes(value as ModuleLevel) ? (value as ModuleLevel) : DEFAULT_LEVEL;
+}
+
+/** How a module is named on the map and in lists. */
+export function moduleLabel(module: Pick<ModuleRecord, 'name' | 'path'>): string {
+  return module.name || module.path;
+}
