@@ -160,7 +160,7 @@ describe('Gravity', () => {
     await harness.navigateByUrl(`${SCREEN}?level=package`);
 
     await answer(expectRanking('package', 21), []);
-    expect(page().querySelector('[role="status"]')?.textContent).toContain('no modules at the package level');
+    expect(page().querySelector('[role="status"]')?.textContent).toContain('no package level: no package was found below the codebase');
   });
 
   it('should show 20 more modules on "Show more", keeping the list and moving focus to the first new one', async () => {
