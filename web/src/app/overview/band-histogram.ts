@@ -10,13 +10,13 @@ interface HistogramBar {
   count: number;
   /** Share of all functions, 0–1. */
   share: number;
-  /** Bar length relative to the largest band, in percent (at least a sliver when count > 0). */
+  /** Bar height relative to the largest band, in percent (at least a sliver when count > 0). */
   length: number;
 }
 
 /**
- * V(G) across a snapshot's functions by band, as a table whose rows carry a bar: the count and
- * share are written out, so the bars are never the only way to read it.
+ * V(G) across a snapshot's functions by band: a bar per band with its count and share written on
+ * it, and the same figures as a table for screen readers (the drawing is hidden from them).
  */
 @Component({
   selector: 'sl-band-histogram',
@@ -43,7 +43,7 @@ export class BandHistogram {
       range: BAND_RANGES[band],
       count: counts[band],
       share: total > 0 ? counts[band] / total : 0,
-      length: counts[band] > 0 ? Math.max(1, (100 * counts[band]) / largest) : 0,
+      length: counts[band] > 0 ? Math.max(2, (100 * counts[band]) / largest) : 0,
     }));
   });
 }

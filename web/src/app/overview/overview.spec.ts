@@ -1,24 +1,66 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
+import { MatDialog } from '@angular/material/dialog';
+import { provideRouter } from '@angular/router';
+import { of } from 'rxjs';
 
-import type { Codebase } from '../api-types';
-import { codebase, errorBody, snapshot } from '../testing/api-fixtures';
+import type { Codebase, Role } from '../api-types';
+import { SessionStore } from '../auth/session-store';
+import { codebase, errorBody, meResponse, snapshot } from '../testing/api-fixtures';
 import { Overview } from './overview';
+import { EVENT_SOURCE_FACTORY, EventSourceLike } from './snapshot-progress';
+import { UploadDialog } from './upload-dialog';
+
+/** An event stream the test drives. */
+class FakeEventSource implements EventSourceLike {
+  onerror: ((event: Event) => void) | null = null;
+  closed = false;
+  private readonly listeners = new Map<string, (event: MessageEvent<string>) => void>();
+  constructor(readonly url: string) {}
+  addEventListener(type: string, listener: (event: MessageEvent<string>) => void): void {
+    this.listeners.set(type, listener);
+  }
+  close(): void {
+    this.closed = true;
+  }
+  emit(type: string, data: unknown): void {
+    this.listeners.get(type)?.(new MessageEvent(type, { data: JSON.stringify(data) }));
+  }
+}
 
 describe('Overview', () => {
   let fixture: ComponentFixture<Overview>;
   let http: HttpTestingController;
+  let sources: FakeEventSource[];
+  let dialogOpen: jest.Mock;
 
-  beforeEach(async () => {
+  async function create(role: Role = 'architect'): Promise<void> {
+    sources = [];
+    dialogOpen = jest.fn(() => ({ afterClosed: () => of({ changed: true }) }));
     TestBed.configureTestingModule({
       imports: [Overview],
-      providers: [provideHttpClient(), provideHttpClientTesting()],
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([]),
+        { provide: MatDialog, useValue: { open: dialogOpen } },
+        {
+          provide: EVENT_SOURCE_FACTORY,
+          useValue: (url: string) => {
+            const source = new FakeEventSource(url);
+            sources.push(source);
+            return source;
+          },
+        },
+      ],
     });
     http = TestBed.inject(HttpTestingController);
+    TestBed.inject(SessionStore).ensureLoaded().subscribe();
+    http.expectOne('/api/me').flush(meResponse(role));
     fixture = TestBed.createComponent(Overview);
     await fixture.whenStable();
-  });
+  }
 
   afterEach(() => http.verify());
 
@@ -31,55 +73,46 @@ describe('Overview', () => {
     await fixture.whenStable();
   }
 
-  function cellTexts(): string[][] {
-    return Array.from(page().querySelectorAll('tr.mat-mdc-row')).map((row) =>
-      Array.from(row.querySelectorAll('td')).map((cell) => cell.textContent?.trim() ?? ''),
-    );
+  /** Answers the figure requests of the cards' latest ready snapshots. */
+  function answerFigures(): void {
+    for (const req of http.match((r) => r.url.endsWith('/functions'))) req.flush({ items: [], total: 1 });
+    for (const req of http.match((r) => r.url.endsWith('/gravity'))) req.flush({ level: 'folder', modules: [] });
   }
 
-  it('should show a progress bar while the codebases load', () => {
+  function uploadButton(): HTMLButtonElement | null {
+    return Array.from(page().querySelectorAll<HTMLButtonElement>('button')).find((b) => b.textContent?.includes('Upload a zip')) ?? null;
+  }
+
+  it('should show a progress bar while the codebases load', async () => {
+    await create();
     expect(page().querySelector('mat-progress-bar')).not.toBeNull();
     expect(page().querySelector('h1')?.textContent).toBe('Overview');
     http.expectOne('/api/codebases');
   });
 
-  it('should list each snapshot with its status, commit, branch and totals', async () => {
-    await answer([
-      codebase('dispatch-monolith', [
-        snapshot({ id: 's-2', status: 'running', progress: 42, totals: null, commit: 'f00dfeed1234', branch: 'split/billing' }),
-        snapshot({ id: 's-1' }),
-      ]),
-    ]);
+  it('should show one card per codebase', async () => {
+    await create();
+    await answer([codebase('dispatch-monolith', [snapshot({ id: 's-1' })]), codebase('billing', [])]);
+    answerFigures();
+    await fixture.whenStable();
 
-    expect(page().querySelector('mat-progress-bar')).toBeNull();
-    const headers = Array.from(page().querySelectorAll('th')).map((th) => th.textContent?.trim());
-    expect(headers).toEqual(['Codebase', 'Snapshot', 'Status', 'Commit', 'Branch', 'Functions', 'ΣV(G)', 'Decisions']);
-    const [running, ready] = cellTexts();
-    expect(running[0]).toBe('dispatch-monolith');
-    expect(running[1]).toContain('28 Nov 2026');
-    expect(running.slice(3)).toEqual(['f00dfee', 'split/billing', '—', '—', '—']);
-    expect(ready.slice(3)).toEqual(['abc1234', 'main', '412', '1,290', '878']);
-    // The state is written out, not only coloured.
-    const states = Array.from(page().querySelectorAll('sl-snapshot-status-label > span'));
-    expect(states.map((label) => label.textContent?.trim())).toEqual(['running 42%', 'ready']);
-  });
-
-  it('should say when a codebase has no snapshot yet', async () => {
-    await answer([codebase('tracking', [])]);
-
-    expect(cellTexts()[0].slice(0, 3)).toEqual(['tracking', 'No snapshot yet', '—']);
+    const names = Array.from(page().querySelectorAll('sl-codebase-summary h2')).map((h) => h.textContent?.trim());
+    expect(names).toEqual(['dispatch-monolith', 'billing']);
+    expect(page().querySelector('[aria-label="Loading codebases"]')).toBeNull();
   });
 
   it('should explain how to get started when there are no codebases', async () => {
+    await create();
     await answer([]);
 
-    expect(page().querySelector('table')).toBeNull();
+    expect(page().querySelector('sl-codebase-summary')).toBeNull();
     expect(page().querySelector('[role="status"]')?.textContent).toContain(
       'No codebases yet. Upload a zip or push a snapshot from CI to see your first analysis here.',
     );
   });
 
   it('should show the error and load again on Retry', async () => {
+    await create();
     http
       .expectOne('/api/codebases')
       .flush(errorBody('internal', 'The database is not reachable.'), { status: 503, statusText: 'Unavailable' });
@@ -87,15 +120,48 @@ describe('Overview', () => {
 
     const alert = page().querySelector('[role="alert"]');
     expect(alert?.textContent).toContain('The database is not reachable.');
-    const retry = alert?.querySelector('button');
-    expect(retry?.textContent).toContain('Retry');
-
-    retry?.click();
+    alert?.querySelector('button')?.click();
     await fixture.whenStable();
     expect(page().querySelector('mat-progress-bar')).not.toBeNull();
 
-    await answer([codebase('dispatch-monolith', [snapshot()])]);
+    await answer([codebase('dispatch-monolith', [])]);
     expect(page().querySelector('[role="alert"]')).toBeNull();
-    expect(cellTexts()).toHaveLength(1);
+    expect(page().querySelectorAll('sl-codebase-summary')).toHaveLength(1);
+  });
+
+  it.each(['owner', 'architect'] as const)('should let an %s open the upload dialog, then load the list again', async (role) => {
+    await create(role);
+    const items = [codebase('dispatch-monolith', [])];
+    await answer(items);
+
+    uploadButton()?.click();
+    expect(dialogOpen).toHaveBeenCalledWith(UploadDialog, expect.objectContaining({ data: { codebases: items } }));
+    await answer(items);
+  });
+
+  it.each(['reviewer', 'viewer'] as const)('should offer no upload to a %s', async (role) => {
+    await create(role);
+    await answer([]);
+
+    expect(uploadButton()).toBeNull();
+  });
+
+  it('should follow an unfinished snapshot live, then load again for its figures once ready', async () => {
+    await create();
+    await answer([codebase('dispatch-monolith', [snapshot({ id: 'run', status: 'queued', progress: 0, totals: null })])]);
+
+    expect(sources.map((s) => s.url)).toEqual(['/api/snapshots/run/events']);
+    sources[0].emit('snapshot', snapshot({ id: 'run', status: 'running', progress: 55, phase: 'calls', totals: null }));
+    await fixture.whenStable();
+    expect(page().querySelector('sl-snapshot-status-label')?.textContent).toContain('running 55%');
+    expect(page().querySelector('.phase')?.textContent?.trim()).toBe('Resolving calls and the module map');
+
+    sources[0].emit('snapshot', snapshot({ id: 'run', status: 'ready' }));
+    expect(sources[0].closed).toBe(true);
+    await answer([codebase('dispatch-monolith', [snapshot({ id: 'run' })])]);
+    answerFigures();
+    await fixture.whenStable();
+    expect(page().querySelector('sl-snapshot-status-label')?.textContent).toContain('ready');
+    expect(sources).toHaveLength(1);
   });
 });
