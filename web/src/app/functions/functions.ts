@@ -279,6 +279,12 @@ export class Functions {
     return ['/snapshots', this.snapshotId(), 'functions', row.id];
   }
 
+  /** A file path split into its folder (with the last slash) and its file name. */
+  protected fileParts(file: string): { folder: string; base: string } {
+    const slash = file.lastIndexOf('/');
+    return { folder: file.slice(0, slash + 1), base: file.slice(slash + 1) };
+  }
+
   /** The search box changed. */
   protected onSearchInput(text: string): void {
     this.searchDraft.set(text);
