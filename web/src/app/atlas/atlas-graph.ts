@@ -41,8 +41,17 @@ export interface AtlasModel {
 export const NODE_SIZE = { min: 3, max: 22 } as const;
 /** Link width in pixels: the lightest and heaviest link. */
 export const EDGE_SIZE = { min: 0.5, max: 6 } as const;
-/** The colour of links (translucent, so dense maps stay readable). */
-export const EDGE_COLOUR = 'rgba(96, 110, 120, 0.35)';
+/**
+ * The colour of links: translucent, so dense maps stay readable. sigma blends as if colours
+ * were premultiplied by their alpha, so the channels are given premultiplied (a slate grey,
+ * rgb(96, 110, 120), at 35 %).
+ */
+export const EDGE_COLOUR = premultiplied(96, 110, 120, 0.35);
+
+/** An rgba() colour with its channels premultiplied by `alpha`, as sigma's WebGL blending expects. */
+export function premultiplied(r: number, g: number, b: number, alpha: number): string {
+  return `rgba(${Math.round(r * alpha)}, ${Math.round(g * alpha)}, ${Math.round(b * alpha)}, ${alpha})`;
+}
 
 /** Node size from ΣV on a square-root scale, so area grows with ΣV. */
 export function nodeSize(cyclomatic: number, maxCyclomatic: number): number {

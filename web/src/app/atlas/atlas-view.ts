@@ -1,4 +1,4 @@
-import type { AtlasEdgeAttributes, AtlasNodeAttributes } from './atlas-graph';
+import { premultiplied, type AtlasEdgeAttributes, type AtlasNodeAttributes } from './atlas-graph';
 
 /** What the person has chosen to see: the selection and the two filters. */
 export interface AtlasView {
@@ -18,7 +18,7 @@ export const PLAIN_VIEW: AtlasView = { selected: null, neighbours: new Set(), mi
 /** The colour of modules and links outside the selected neighbourhood. */
 export const DIMMED_COLOUR = '#E4E7E8';
 /** The colour of the selected module's links. */
-export const HIGHLIGHT_EDGE_COLOUR = 'rgba(38, 50, 56, 0.85)';
+export const HIGHLIGHT_EDGE_COLOUR = premultiplied(38, 50, 56, 0.85);
 
 /** How one node is drawn (the fields sigma's node reducer may change). */
 export interface NodeLook {
