@@ -1,16 +1,19 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 
-import { describeTrend, SPARKLINE_BOX, sparklineGeometry, trendChange } from './gravity-trend';
+import { describeTrend, isNewModule, SPARKLINE_BOX, sparklineGeometry, trendChange } from './gravity-trend';
 import type { GravityTrendPoint } from './gravity-types';
 
 /**
  * A module's gravity across earlier snapshots of its codebase as a small line on a fixed 0–100
- * scale, with the change written beside it. Renders nothing for a single snapshot.
+ * scale, with the change written beside it. A module that no earlier snapshot has is said to be
+ * new in words instead; a single snapshot renders nothing.
  */
 @Component({
   selector: 'sl-gravity-sparkline',
   template: `
-    @if (description(); as label) {
+    @if (isNew()) {
+      <span class="change">new: not in the {{ earlierCount() === 1 ? 'earlier snapshot' : earlierCount() + ' earlier snapshots' }}</span>
+    } @else if (description(); as label) {
       <svg
         role="img"
         [attr.aria-label]="label"
@@ -68,6 +71,10 @@ export class GravitySparkline {
   /** The module's gravity per snapshot, oldest first, the snapshot in view last. */
   readonly trend = input.required<readonly GravityTrendPoint[]>();
 
+  /** Whether earlier snapshots exist and none has the module. */
+  protected readonly isNew = computed(() => isNewModule(this.trend()));
+  /** How many earlier snapshots the trend covers. */
+  protected readonly earlierCount = computed(() => this.trend().length - 1);
   /** Drawing size. */
   protected readonly box = SPARKLINE_BOX;
   /** The trend in words (the image's accessible name); null hides the sparkline. */

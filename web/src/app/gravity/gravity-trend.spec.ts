@@ -1,5 +1,5 @@
 import { gravityModule, trend } from './gravity-fixtures';
-import { describeTrend, sparklineGeometry, trendChange } from './gravity-trend';
+import { describeTrend, isNewModule, sparklineGeometry, trendChange } from './gravity-trend';
 
 describe('sparklineGeometry', () => {
   const box = { width: 100, height: 24, padding: 2 };
@@ -68,8 +68,16 @@ describe('trendChange', () => {
     expect(trendChange(trend([52], 52))).toBe('±0');
   });
 
-  it('should mark a module that is new in this snapshot, and give nothing for one snapshot', () => {
-    expect(trendChange(trend([null], 52))).toBe('new');
+  it('should give nothing for a module new in this snapshot or for a single snapshot', () => {
+    expect(trendChange(trend([null], 52))).toBeNull();
     expect(trendChange(trend([], 52))).toBeNull();
+  });
+});
+
+describe('isNewModule', () => {
+  it('should tell a module that no earlier snapshot has', () => {
+    expect(isNewModule(trend([null, null], 52))).toBe(true);
+    expect(isNewModule(trend([null, 40], 52))).toBe(false);
+    expect(isNewModule(trend([], 52))).toBe(false);
   });
 });

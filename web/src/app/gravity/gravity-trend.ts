@@ -82,13 +82,17 @@ export function describeTrend(trend: readonly GravityTrendPoint[]): string | nul
   return `Gravity ${delta > 0 ? 'rose' : 'fell'} from ${format(first)} to ${format(current)} ${span}`;
 }
 
-/** The change since the earliest snapshot with the module, as a short signed figure ("+3.9"), or "new". */
+/** Whether earlier snapshots exist and none of them has the module: it is new in the snapshot in view. */
+export function isNewModule(trend: readonly GravityTrendPoint[]): boolean {
+  return trend.length > 1 && trend[trend.length - 1].gravity !== null && trend.slice(0, -1).every((entry) => entry.gravity === null);
+}
+
+/** The change since the earliest snapshot with the module, as a short signed figure ("+3.9"); null if there is none to compare. */
 export function trendChange(trend: readonly GravityTrendPoint[]): string | null {
-  if (trend.length < 2) return null;
+  if (trend.length < 2 || isNewModule(trend)) return null;
   const current = trend[trend.length - 1].gravity;
   const first = trend.find((entry) => entry.gravity !== null)?.gravity ?? null;
   if (current === null || first === null) return null;
-  if (trend.slice(0, -1).every((entry) => entry.gravity === null)) return 'new';
   const delta = round1(current - first);
   return delta === 0 ? '±0' : `${delta > 0 ? '+' : '−'}${format(Math.abs(delta))}`;
 }

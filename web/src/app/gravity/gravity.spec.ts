@@ -5,7 +5,7 @@ import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 
-import { errorBody } from '../testing/api-fixtures';
+import { errorBody, snapshot } from '../testing/api-fixtures';
 import { Gravity } from './gravity';
 import { gravityModule, trend } from './gravity-fixtures';
 import type { GravityModule, ModuleLevel } from './gravity-types';
@@ -43,6 +43,13 @@ describe('Gravity', () => {
 
   afterEach(() => http.verify());
 
+  /** Opens the screen and answers the subtitle's snapshot request. */
+  async function open(url: string): Promise<void> {
+    await harness.navigateByUrl(url);
+    http.expectOne({ method: 'GET', url: `/api/snapshots/${SNAPSHOT}` }).flush({ snapshot: snapshot({ id: SNAPSHOT, commit: 'v3.14.0' }) });
+    await harness.fixture.whenStable();
+  }
+
   function page(): HTMLElement {
     return harness.routeNativeElement as HTMLElement;
   }
@@ -72,9 +79,13 @@ describe('Gravity', () => {
   }
 
   it('should ask for the top 20 folders and show progress meanwhile', async () => {
-    await harness.navigateByUrl(SCREEN);
+    await open(SCREEN);
 
     expect(page().querySelector('h1')?.textContent).toBe('Gravity');
+    // Local time: the hour depends on the machine's time zone.
+    expect(page().querySelector('.snapshot')?.textContent?.replace(/\s+/g, ' ').trim()).toMatch(
+      /^Snapshot v3\.14\.0 on main, 2[89] Nov 2026, \d\d:\d\d$/,
+    );
     expect(page().querySelector('mat-progress-bar')).not.toBeNull();
     expect(page().querySelector('.intro')?.textContent).toContain('not a verdict');
     // One more than shown, to know whether there are more.
@@ -83,7 +94,7 @@ describe('Gravity', () => {
   });
 
   it('should show each module with rank, score, reasons as sentences, figures and links', async () => {
-    await harness.navigateByUrl(SCREEN);
+    await open(SCREEN);
     await answer(expectRanking('folder', 21), [
       gravityModule({ reasons: ['called from 3 of 3 other clusters', 'only 45 % of its call weight stays in its cluster'] }),
       gravityModule({ id: 'package:packages/dispatch', path: 'packages/dispatch', name: '@otterbay/dispatch', gravityRank: 2, gravity: 53.4, instability: null }),
@@ -124,23 +135,27 @@ describe('Gravity', () => {
     expect(page().querySelector('.more')).toBeNull();
   });
 
-  it('should draw a sparkline only for a module with earlier snapshots', async () => {
-    await harness.navigateByUrl(SCREEN);
+  it('should draw a sparkline for a module with earlier snapshots and call a module without them new', async () => {
+    await open(SCREEN);
     await answer(expectRanking('folder', 21), [
       gravityModule({ trend: trend([70.1, 75], 79.5) }),
       gravityModule({ id: 'folder:src/shared', path: 'src/shared', gravityRank: 2 }),
+      gravityModule({ id: 'folder:src/planner', path: 'src/planner', gravityRank: 3, trend: trend([null, null], 50.2) }),
     ]);
 
-    const [withTrend, single] = items();
+    const [withTrend, single, fresh] = items();
     const svg = withTrend.querySelector('svg[role="img"]');
     expect(svg?.getAttribute('aria-label')).toBe('Gravity rose from 70.1 to 79.5 over 3 snapshots');
     expect(svg?.querySelectorAll('circle').length).toBe(3);
     expect(withTrend.querySelector('.change')?.textContent).toBe('+9.4');
     expect(single.querySelector('svg')).toBeNull();
+    expect(single.querySelector('sl-gravity-sparkline')?.textContent?.trim()).toBe('');
+    expect(fresh.querySelector('svg')).toBeNull();
+    expect(fresh.querySelector('sl-gravity-sparkline')?.textContent?.trim()).toBe('new: not in the 2 earlier snapshots');
   });
 
   it('should switch level through the URL and ask again from the top', async () => {
-    await harness.navigateByUrl(`${SCREEN}?limit=40`);
+    await open(`${SCREEN}?limit=40`);
     await answer(expectRanking('folder', 41), modules(3));
 
     const toggles = Array.from(page().querySelectorAll<HTMLButtonElement>('mat-button-toggle button'));
@@ -157,14 +172,14 @@ describe('Gravity', () => {
   });
 
   it('should read the level from the URL (a reload keeps it)', async () => {
-    await harness.navigateByUrl(`${SCREEN}?level=package`);
+    await open(`${SCREEN}?level=package`);
 
     await answer(expectRanking('package', 21), []);
     expect(page().querySelector('[role="status"]')?.textContent).toContain('no package level: no package was found below the codebase');
   });
 
   it('should show 20 more modules on "Show more", keeping the list and moving focus to the first new one', async () => {
-    await harness.navigateByUrl(SCREEN);
+    await open(SCREEN);
     await answer(expectRanking('folder', 21), modules(21));
 
     expect(items().length).toBe(20);
@@ -186,7 +201,7 @@ describe('Gravity', () => {
   });
 
   it('should show the server message for a snapshot without the module map', async () => {
-    await harness.navigateByUrl(SCREEN);
+    await open(SCREEN);
     const message = 'This snapshot was made without the call graph (`seamline scan --no-calls`), so it has no modules, clusters or gravity.';
     expectRanking('folder', 21).flush(errorBody('no_module_map', message), { status: 409, statusText: 'Conflict' });
     await harness.fixture.whenStable();
@@ -197,7 +212,7 @@ describe('Gravity', () => {
   });
 
   it('should offer Retry after a failure and ask again', async () => {
-    await harness.navigateByUrl(SCREEN);
+    await open(SCREEN);
     expectRanking('folder', 21).flush(null, { status: 502, statusText: 'Bad Gateway' });
     await harness.fixture.whenStable();
 

@@ -1,4 +1,4 @@
-import { DecimalPipe } from '@angular/common';
+import { DatePipe, DecimalPipe } from '@angular/common';
 import {
   afterNextRender,
   ChangeDetectionStrategy,
@@ -10,7 +10,7 @@ import {
   input,
   signal,
 } from '@angular/core';
-import { takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
@@ -18,6 +18,8 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { catchError, map, of, startWith, switchMap } from 'rxjs';
 
+import type { Snapshot } from '../api-types';
+import { SnapshotFiguresApi } from '../overview/snapshot-figures-api';
 import { snapshotScreenPath } from '../snapshot/current-snapshot';
 import { GravityApi } from './gravity-api';
 import { GravitySparkline } from './gravity-sparkline';
@@ -56,6 +58,7 @@ interface RankingRequest {
 @Component({
   selector: 'sl-gravity',
   imports: [
+    DatePipe,
     DecimalPipe,
     GravitySparkline,
     MatButtonModule,
@@ -74,6 +77,7 @@ export class Gravity {
   private readonly route = inject(ActivatedRoute);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
   private readonly injector = inject(Injector);
+  private readonly snapshots = inject(SnapshotFiguresApi);
 
   /** Route parameter: the snapshot in view. */
   readonly snapshotId = input.required<string>();
@@ -82,6 +86,19 @@ export class Gravity {
   /** Query parameter: how many modules to show (20 by default). */
   readonly limit = input<string | undefined>();
 
+  /** The snapshot in view (commit, branch, date) for the subtitle; null until known or if it cannot be read. */
+  protected readonly snapshot = toSignal(
+    toObservable(this.snapshotId).pipe(
+      switchMap((id) =>
+        this.snapshots.snapshot(id).pipe(
+          startWith<Snapshot | null>(null),
+          // The subtitle is a courtesy: the ranking request reports any real problem.
+          catchError(() => of(null)),
+        ),
+      ),
+    ),
+    { initialValue: null },
+  );
   /** The levels offered by the switch. */
   protected readonly levels = MODULE_LEVELS;
   /** The level in view. */
