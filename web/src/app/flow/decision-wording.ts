@@ -47,6 +47,32 @@ const KIND_NAMES: Record<DecisionKind, string> = {
   'default-value': 'default value',
 };
 
+/** A short tag for a decision block, beside its line: "if", "&&", "while"… */
+const KIND_TAGS: Record<DecisionKind, string> = {
+  if: 'if',
+  conditional: '?:',
+  case: 'case',
+  for: 'for',
+  'for-in': 'for…in',
+  'for-of': 'for…of',
+  while: 'while',
+  'do-while': 'do…while',
+  catch: 'catch',
+  and: '&& left side',
+  or: '|| left side',
+  'and-assign': '&&= left side',
+  'or-assign': '||= left side',
+  nullish: '?? left side',
+  'nullish-assign': '??= left side',
+  'optional-chain': '?.',
+  'default-value': 'default',
+};
+
+/** The short tag of a decision kind, e.g. "&& left side". */
+export function kindTag(kind: DecisionKind): string {
+  return KIND_TAGS[kind];
+}
+
 /** The word on an edge leaving a decision of `kind` with `outcome`. */
 export function outcomeWord(kind: DecisionKind, outcome: Outcome): string {
   const [whenTrue, whenFalse] = OUTCOME_WORDS[kind];

@@ -61,7 +61,7 @@ describe('describeBlock', () => {
       kind: 'decision',
       decision: 0,
       title: 'ready',
-      subtitle: 'line 3',
+      subtitle: 'line 3 · if',
       ariaLabel: 'Decision 1, if on line 3: ready',
       lines: { from: 3, to: 3 },
     });

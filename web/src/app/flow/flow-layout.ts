@@ -1,6 +1,6 @@
 import dagre from '@dagrejs/dagre';
 
-import { kindName, outcomeWord } from './decision-wording';
+import { kindName, kindTag, outcomeWord } from './decision-wording';
 import type { CompactGraph, Outcome } from './flow-types';
 
 /** What a drawn block is. */
@@ -113,7 +113,7 @@ export function describeBlock(graph: CompactGraph, id: number): DrawnBlock {
   if (decision >= 0) {
     const d = graph.decisions[decision];
     const title = truncate(d.text, MAX_TITLE_CHARS);
-    const subtitle = `line ${d.span.line}`;
+    const subtitle = `line ${d.span.line} · ${kindTag(d.kind)}`;
     return {
       ...base,
       kind: 'decision',
