@@ -36,6 +36,12 @@ export const routes: Routes = [
         canActivate: [requireRole(...ALL_ROLES)],
         loadComponent: () => import('./gravity/gravity').then((m) => m.Gravity),
       },
+      {
+        path: 'snapshots/:snapshotId/functions/:functionId',
+        title: 'Flow · Seamline',
+        canActivate: [requireRole(...ALL_ROLES)],
+        loadComponent: () => import('./flow/flow').then((m) => m.Flow),
+      },
     ],
   },
   { path: '**', redirectTo: 'overview' },
