@@ -4,11 +4,12 @@ import { describeTrend, isNewModule, sparklineGeometry, trendChange } from './gr
 describe('sparklineGeometry', () => {
   const box = { width: 100, height: 24, padding: 2 };
 
-  it('should spread snapshots evenly and put gravity on a fixed 0–100 scale', () => {
+  it('should spread snapshots evenly and span the values from bottom to top', () => {
     const geometry = sparklineGeometry(trend([0, 50], 100), box);
 
     expect(geometry.baseline).toBe(22);
     expect(geometry.top).toBe(2);
+    expect([geometry.low, geometry.high]).toEqual([0, 100]);
     expect(geometry.points).toEqual([
       { x: 2, y: 22, gravity: 0, isCurrent: false },
       { x: 50, y: 12, gravity: 50, isCurrent: false },
@@ -21,8 +22,21 @@ describe('sparklineGeometry', () => {
     const geometry = sparklineGeometry(trend([40, null, 30], 30), box);
 
     expect(geometry.points.map((p) => p.x)).toEqual([2, 66, 98]);
+    // 30–40 is narrower than 20 points: drawn as 25–45 around its middle.
+    expect([geometry.low, geometry.high]).toEqual([25, 45]);
+    expect(geometry.points.map((p) => p.y)).toEqual([7, 17, 17]);
     // 40 stands alone before the gap: a dot, no path; 30 → 30 is one flat run.
-    expect(geometry.paths).toEqual(['M66,16 L98,16']);
+    expect(geometry.paths).toEqual(['M66,17 L98,17']);
+  });
+
+  it('should draw a wide change across the full height and keep a narrow range inside 0–100', () => {
+    expect(sparklineGeometry(trend([50], 80), box).points.map((p) => p.y)).toEqual([22, 2]);
+    expect(sparklineGeometry(trend([61.2], 79.5), box).points.map((p) => p.y)).toEqual([21.15, 2.85]);
+    const low = sparklineGeometry(trend([2], 4), box);
+    expect([low.low, low.high]).toEqual([0, 20]);
+    expect(low.points.map((p) => p.y)).toEqual([20, 18]);
+    const high = sparklineGeometry(trend([99], 97), box);
+    expect([high.low, high.high]).toEqual([80, 100]);
   });
 
   it('should keep values outside 0–100 inside the box', () => {
@@ -35,7 +49,7 @@ describe('sparklineGeometry', () => {
   it('should place a single snapshot at the left edge', () => {
     const geometry = sparklineGeometry(gravityModule().trend, box);
 
-    expect(geometry.points).toEqual([{ x: 2, y: 6.1, gravity: 79.5, isCurrent: true }]);
+    expect(geometry.points).toEqual([{ x: 2, y: 12, gravity: 79.5, isCurrent: true }]);
     expect(geometry.paths).toEqual([]);
   });
 });

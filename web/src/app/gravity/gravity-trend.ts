@@ -21,23 +21,32 @@ export interface SparklineGeometry {
   /** `d` attributes; a snapshot without the module breaks the line. */
   paths: string[];
   points: SparklinePoint[];
-  /** y of gravity 0 and of gravity 100, for the frame. */
+  /** y of the bottom and the top of the drawn range. */
   baseline: number;
   top: number;
+  /** The gravity range drawn from bottom to top. */
+  low: number;
+  high: number;
 }
 
 /** The default sparkline size. */
-export const SPARKLINE_BOX: SparklineBox = { width: 96, height: 28, padding: 3 };
+export const SPARKLINE_BOX: SparklineBox = { width: 112, height: 30, padding: 3 };
+
+/** The narrowest gravity range a sparkline spans, so a change of a point or two stays a small step. */
+export const MIN_SPAN = 20;
 
 /**
- * Places a trend on a fixed 0–100 scale (so a small change looks small), snapshots evenly
- * spaced from left (oldest) to right (the snapshot in view). Needs at least two snapshots.
+ * Places a trend in a box, snapshots evenly spaced from left (oldest) to right (the snapshot in
+ * view). Height shows the range of the module's own values, widened to at least MIN_SPAN points
+ * of the 0–100 scale around their middle, so changes can be seen without blowing up noise.
  */
 export function sparklineGeometry(trend: readonly GravityTrendPoint[], box: SparklineBox = SPARKLINE_BOX): SparklineGeometry {
   const { width, height, padding } = box;
   const baseline = height - padding;
   const top = padding;
   const step = trend.length > 1 ? (width - 2 * padding) / (trend.length - 1) : 0;
+  const values = trend.flatMap((entry) => (entry.gravity === null ? [] : [clamp(entry.gravity)]));
+  const [low, high] = drawnRange(values);
   const points: SparklinePoint[] = [];
   const paths: string[] = [];
   let run: string[] = [];
@@ -50,14 +59,32 @@ export function sparklineGeometry(trend: readonly GravityTrendPoint[], box: Spar
       closeRun();
       return;
     }
-    const value = Math.min(100, Math.max(0, entry.gravity));
     const x = round(padding + index * step);
-    const y = round(baseline - (value / 100) * (baseline - top));
+    const y = round(baseline - ((clamp(entry.gravity) - low) / (high - low)) * (baseline - top));
     points.push({ x, y, gravity: entry.gravity, isCurrent: index === trend.length - 1 });
     run.push(`${run.length === 0 ? 'M' : 'L'}${x},${y}`);
   });
   closeRun();
-  return { paths, points, baseline, top };
+  return { paths, points, baseline, top, low, high };
+}
+
+/** The values' own range widened to MIN_SPAN around its middle, kept inside 0–100. */
+function drawnRange(values: readonly number[]): [number, number] {
+  if (values.length === 0) return [0, 100];
+  let low = Math.min(...values);
+  let high = Math.max(...values);
+  if (high - low < MIN_SPAN) {
+    const middle = (low + high) / 2;
+    low = middle - MIN_SPAN / 2;
+    high = middle + MIN_SPAN / 2;
+    if (low < 0) [low, high] = [0, MIN_SPAN];
+    if (high > 100) [low, high] = [100 - MIN_SPAN, 100];
+  }
+  return [low, high];
+}
+
+function clamp(value: number): number {
+  return Math.min(100, Math.max(0, value));
 }
 
 /**
