@@ -45,6 +45,8 @@ export class FlowGraph {
   readonly edgeCoverage = input<readonly (boolean | null)[]>([]);
   /** The block chosen to be shown in the source, if any. */
   readonly chosenBlock = input<number | null>(null);
+  /** A block to scroll into view when the graph is first drawn (e.g. a deep-linked path's), if any. */
+  readonly startBlock = input<number | null>(null);
   /** A block was clicked or activated with the keyboard. */
   readonly blockChosen = output<number>();
 
@@ -62,7 +64,11 @@ export class FlowGraph {
   private drag: { x: number; y: number; left: number; top: number } | null = null;
 
   constructor() {
-    afterNextRender(() => this.fitReadable());
+    afterNextRender(() => {
+      this.fitReadable();
+      const start = this.startBlock();
+      if (start !== null) this.revealBlock(start);
+    });
   }
 
   /** Zooms so the graph's width fits the panel (never above 100 %). */
@@ -131,7 +137,8 @@ export class FlowGraph {
   }
 
   /** Scrolls the panel so the block is in view (used when a path is chosen). */
-  revealBlock(id: number): void {
+  revealBlock(id: number | null): void {
+    if (id === null) return;
     const block = this.layout().blocks[id];
     if (!block) return;
     const el = this.viewport().nativeElement;

@@ -72,7 +72,7 @@ describe('Flow', () => {
       http.expectOne(URL).flush(errorBody('not_found', 'No such function in this snapshot.'), { status: 404, statusText: 'Not Found' });
       await settle();
 
-      expect(text('[role="alert"]')).toContain('This function is not in this snapshot. No such function in this snapshot.');
+      expect(text('[role="alert"]')).toBe('error No such function in this snapshot. It may have moved or been removed since; find it in the Functions table. Open Functions');
       expect(page().querySelector('[role="alert"] a')?.getAttribute('href')).toBe('/snapshots/s-1/functions');
     });
 

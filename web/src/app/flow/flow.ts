@@ -1,6 +1,17 @@
 import { DecimalPipe, PercentPipe } from '@angular/common';
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal, viewChild } from '@angular/core';
+import {
+  afterNextRender,
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  ElementRef,
+  inject,
+  Injector,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -53,6 +64,8 @@ export class Flow {
   private readonly flowApi = inject(FlowApi);
   private readonly checklist = inject(PathChecklist);
   private readonly router = inject(Router);
+  private readonly injector = inject(Injector);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
 
   /** Route parameter: the snapshot. */
   readonly snapshotId = input.required<string>();
@@ -98,6 +111,11 @@ export class Flow {
     const steps = this.selectedPath()?.steps ?? [];
     return steps.length > 0 ? steps[steps.length - 1].decision : null;
   });
+  /** The block the graph first scrolls to: the selected path's last decision. */
+  protected readonly startBlock = computed(() => {
+    const path = this.selectedPath();
+    return path ? this.focusBlockOf(path) : null;
+  });
   protected readonly focusLine = computed(() => {
     const d = this.pathFocusDecision();
     return d === null ? null : (this.view()?.detail.graph.decisions[d]?.span.line ?? null);
@@ -141,6 +159,8 @@ export class Flow {
         if (state.kind === 'loaded') {
           this.chosenBlock.set(null);
           this.ticked.set(this.checklist.load(this.snapshotId(), this.functionId()));
+          // A deep link with ?path=N opens with that path in the list in view (the graph scrolls by itself).
+          afterNextRender(() => this.revealInList(this.selectedPath()), { injector: this.injector });
         }
       });
   }
@@ -158,12 +178,23 @@ export class Flow {
       queryParamsHandling: 'merge',
       replaceUrl: true,
     });
-    const view = this.view();
-    const path = index === null ? null : view?.detail.basisPaths[index];
-    if (!view || !path) return;
+    const path = index === null ? null : this.view()?.detail.basisPaths[index];
+    if (path) this.graph()?.revealBlock(this.focusBlockOf(path));
+  }
+
+  /** Scrolls the list of paths so the path is in view. */
+  private revealInList(path: BasisPath | null): void {
+    const list = this.host.nativeElement.querySelector<HTMLElement>('.path-scroll');
+    const item = path && list?.querySelector<HTMLElement>(`[data-path="${path.index + 1}"]`);
+    if (list && item) list.scrollTop = item.offsetTop;
+  }
+
+  /** The block a path is about: its last decision's (the entry for a path without decisions). */
+  private focusBlockOf(path: BasisPath): number | null {
+    const graph = this.view()?.detail.graph;
+    if (!graph) return null;
     const last = path.steps[path.steps.length - 1];
-    const block = last ? view.detail.graph.decisions[last.decision].block : view.detail.graph.entry;
-    this.graph()?.revealBlock(block);
+    return last ? graph.decisions[last.decision].block : graph.entry;
   }
 
   /** Ticks or unticks a path as tested and stores the checklist. */
