@@ -1,5 +1,5 @@
 import { codebase, snapshot } from '../testing/api-fixtures';
-import { headlineFigures, isUnfinished, latestReady, phaseLabel } from './headline-figures';
+import { formatBytes, headlineFigures, isUnfinished, latestReady, phaseLabel } from './headline-figures';
 
 describe('latestReady', () => {
   it('should pick the newest ready snapshot, passing over running and failed ones', () => {
@@ -70,5 +70,18 @@ describe('isUnfinished and phaseLabel', () => {
     expect(phaseLabel('calls')).toBe('Resolving calls and the module map');
     expect(phaseLabel('weigh')).toBe('weigh');
     expect(phaseLabel(null)).toBe('Working');
+  });
+});
+
+describe('formatBytes', () => {
+  it.each([
+    [0, '0 bytes'],
+    [1, '1 byte'],
+    [17, '17 bytes'],
+    [86317, '84 KB'],
+    [5 * 1024 * 1024 + 200_000, '5.2 MB'],
+    [200 * 1024 * 1024, '200 MB'],
+  ])('should write %d as %s', (bytes, text) => {
+    expect(formatBytes(bytes)).toBe(text);
   });
 });

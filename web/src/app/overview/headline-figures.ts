@@ -78,3 +78,10 @@ export function phaseLabel(phase: string | null | undefined): string {
       return phase ? phase : 'Working';
   }
 }
+
+/** A file size for people: bytes, KB or MB (1 KB = 1,024 bytes). */
+export function formatBytes(bytes: number): string {
+  if (bytes < 1024) return `${bytes.toLocaleString('en-US')} ${bytes === 1 ? 'byte' : 'bytes'}`;
+  if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024).toLocaleString('en-US')} KB`;
+  return `${(bytes / (1024 * 1024)).toLocaleString('en-US', { maximumFractionDigits: 1 })} MB`;
+}

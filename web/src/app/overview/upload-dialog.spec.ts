@@ -130,7 +130,7 @@ describe('UploadDialog', () => {
     req.event({ type: HttpEventType.UploadProgress, loaded: 500, total: 1000 });
     await fixture.whenStable();
     expect(text()).toContain('Uploading the zip…');
-    expect(text()).toContain('50% sent');
+    expect(text()).toContain('50% sent · 500 bytes of 1,000 bytes');
 
     const queued = snapshot({ id: 's-new', status: 'queued', progress: 0, phase: 'queued', totals: null });
     req.flush({ snapshot: queued, links: { status: '/api/snapshots/s-new', events: '/api/snapshots/s-new/events' } }, { status: 202, statusText: 'Accepted' });

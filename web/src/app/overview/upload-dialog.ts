@@ -16,7 +16,7 @@ import { apiErrorMessage } from '../api-error-message';
 import type { Codebase, Snapshot } from '../api-types';
 import { snapshotScreenPath } from '../snapshot/current-snapshot';
 import { CodebasesApi } from './codebases-api';
-import { phaseLabel } from './headline-figures';
+import { formatBytes, phaseLabel } from './headline-figures';
 import { SnapshotProgress } from './snapshot-progress';
 
 /** What the Overview passes to the dialog. */
@@ -119,6 +119,8 @@ export class UploadDialog {
 
   /** The phase of the analysis, in words. */
   protected readonly phaseLabel = phaseLabel;
+  /** A file size in words. */
+  protected readonly formatBytes = formatBytes;
 
   constructor() {
     this.form.controls.codebase.valueChanges.pipe(takeUntilDestroyed()).subscribe((value) => {
