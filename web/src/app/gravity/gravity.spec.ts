@@ -121,12 +121,12 @@ describe('Gravity', () => {
     });
     expect(links).toEqual([
       {
-        text: 'functions Functions in this module: src/dispatch-core',
+        text: 'functions Functions in this module (src/dispatch-core)',
         path: `snapshots/${SNAPSHOT}/functions`,
         query: { module: 'folder:src/dispatch-core' },
       },
       {
-        text: 'hub On the Atlas: src/dispatch-core',
+        text: 'hub On the Atlas (src/dispatch-core)',
         path: `snapshots/${SNAPSHOT}/atlas`,
         query: { focus: 'folder:src/dispatch-core', level: 'folder' },
       },
