@@ -279,10 +279,9 @@ export class Functions {
     return ['/snapshots', this.snapshotId(), 'functions', row.id];
   }
 
-  /** A file path split into its folder (with the last slash) and its file name. */
-  protected fileParts(file: string): { folder: string; base: string } {
-    const slash = file.lastIndexOf('/');
-    return { folder: file.slice(0, slash + 1), base: file.slice(slash + 1) };
+  /** `text` cut after each `separator`, so long names and paths may wrap there (`a.b.c` → `a.`, `b.`, `c`). */
+  protected segments(text: string, separator: string): string[] {
+    return text.split(separator).map((part, i, all) => (i < all.length - 1 ? part + separator : part));
   }
 
   /** The search box changed. */
