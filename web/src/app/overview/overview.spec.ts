@@ -164,4 +164,18 @@ describe('Overview', () => {
     expect(page().querySelector('sl-snapshot-status-label')?.textContent).toContain('ready');
     expect(sources).toHaveLength(1);
   });
+
+  it('should stream at most two unfinished snapshots and poll the others, keeping the browser’s connections free', async () => {
+    await create();
+    const queued = (id: string) => snapshot({ id, status: 'queued', progress: 0, totals: null });
+    await answer([codebase('dispatch-monolith', [queued('a'), queued('b')]), codebase('billing', [queued('c')])]);
+
+    expect(sources.map((s) => s.url)).toEqual(['/api/snapshots/a/events', '/api/snapshots/b/events']);
+    http.expectOne('/api/snapshots/c').flush({ snapshot: snapshot({ id: 'c', status: 'running', progress: 12, totals: null }) });
+    await fixture.whenStable();
+    const labels = Array.from(page().querySelectorAll('sl-snapshot-status-label > span')).map((l) => l.textContent?.trim());
+    expect(labels).toEqual(['queued', 'queued', 'running 12%']);
+    fixture.destroy();
+    expect(sources.every((s) => s.closed)).toBe(true);
+  });
 });

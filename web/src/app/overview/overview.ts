@@ -21,6 +21,12 @@ type OverviewState =
   | { kind: 'failed'; message: string }
   | { kind: 'loaded'; codebases: Codebase[] };
 
+/**
+ * Unfinished snapshots followed by event stream; the rest are polled. Each stream holds one of
+ * the browser's six connections per server, and the upload dialog may need one more.
+ */
+const MAX_STREAMS = 2;
+
 /** Roles that may upload (the server refuses the others anyway). */
 const UPLOADERS: readonly Role[] = ['owner', 'architect'];
 
@@ -109,9 +115,12 @@ export class Overview implements OnInit {
   private followUnfinished(codebases: readonly Codebase[]): void {
     this.follows.unsubscribe();
     this.follows = new Subscription();
-    for (const snapshot of codebases.flatMap((codebase) => codebase.snapshots).filter(isUnfinished)) {
+    const unfinished = codebases.flatMap((codebase) => codebase.snapshots).filter(isUnfinished);
+    unfinished.forEach((snapshot, index) => {
+      const updates =
+        index < MAX_STREAMS ? this.progress.follow(snapshot.id) : this.progress.followByPolling(snapshot.id);
       this.follows.add(
-        this.progress.follow(snapshot.id).subscribe({
+        updates.subscribe({
           next: (update) => {
             if (update.kind === 'snapshot' && isUnfinished(update.snapshot)) this.replaceSnapshot(update.snapshot);
           },
@@ -119,7 +128,7 @@ export class Overview implements OnInit {
           error: () => undefined, // the row keeps its last known state; Retry or a reload asks again
         }),
       );
-    }
+    });
   }
 
   /** Puts a newer state of a snapshot into the loaded list. */

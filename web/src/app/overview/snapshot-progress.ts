@@ -66,12 +66,12 @@ export class SnapshotProgress {
     return new Observable<ProgressUpdate>((subscriber) => {
       const source = this.openEventSource(`/api/snapshots/${encodeURIComponent(snapshotId)}/events`);
       if (!source) {
-        return this.poll(snapshotId).subscribe(subscriber);
+        return this.followByPolling(snapshotId).subscribe(subscriber);
       }
       let fallback: Subscription | null = null;
       const fallBackToPolling = () => {
         source.close();
-        fallback ??= this.poll(snapshotId).subscribe(subscriber);
+        fallback ??= this.followByPolling(snapshotId).subscribe(subscriber);
       };
       const deliver = (update: ProgressUpdate) => {
         subscriber.next(update);
@@ -94,8 +94,12 @@ export class SnapshotProgress {
     });
   }
 
-  /** Asks for the snapshot's state every few seconds until the analysis ends; 404 means gone. */
-  private poll(snapshotId: string): Observable<ProgressUpdate> {
+  /**
+   * The same updates by asking `GET /api/snapshots/:id` every few seconds (404 means gone). Also
+   * for following many snapshots at once: each event stream holds one of the browser's few
+   * connections per server.
+   */
+  followByPolling(snapshotId: string): Observable<ProgressUpdate> {
     // The first ask goes at once; then one every pollMs.
     return interval(this.pollMs).pipe(
       startWith(-1),
