@@ -313,6 +313,8 @@ describe('Functions', () => {
     const alert = page().querySelector('[role="alert"]');
     expect(alert?.textContent).toContain('Could not load the functions. This snapshot is still being analysed (42%).');
     expect(alert?.querySelector('a')?.getAttribute('href')).toBe('/overview');
+    // Without any page the filters are left out; the error is what matters.
+    expect(page().querySelector('section.filters')).toBeNull();
     const retry = Array.from(alert?.querySelectorAll('button') ?? []).find((b) => b.textContent?.includes('Retry'));
     retry?.click();
     await harness.fixture.whenStable();
