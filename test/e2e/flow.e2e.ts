@@ -106,5 +106,5 @@ describe('the Flow screen', () => {
 
     expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
     await context.close();
-  });
+  }, 120_000);
 });
