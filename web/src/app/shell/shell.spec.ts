@@ -62,11 +62,19 @@ describe('Shell', () => {
 
   it('should offer the Overview in a labelled navigation, marked as the current page', () => {
     const nav = page.querySelector('nav[aria-label="Screens"]');
-    const links = Array.from(nav?.querySelectorAll('a') ?? []);
+    const links = Array.from(nav?.querySelectorAll('a[href]') ?? []);
 
     expect(links.map((link) => link.textContent?.trim())).toEqual(['dashboardOverview']);
     expect(links[0].getAttribute('href')).toBe('/overview');
     expect(links[0].getAttribute('aria-current')).toBe('page');
+  });
+
+  it('should show snapshot screens as disabled entries while no snapshot is in view', () => {
+    const disabled = Array.from(page.querySelectorAll('nav[aria-label="Screens"] a[aria-disabled="true"]'));
+
+    expect(disabled.length).toBeGreaterThan(0);
+    expect(disabled.every((entry) => !entry.hasAttribute('href'))).toBe(true);
+    expect(disabled[0].getAttribute('title')).toMatch(/^Open a ready snapshot from the Overview/);
   });
 
   it('should render the routed screen inside the main landmark', () => {
