@@ -32,8 +32,27 @@ const ROW_COLUMNS = `function_id AS id, name, qualified_name AS "qualifiedName",
   outcomes_covered AS "outcomesCovered", outcomes_total AS "outcomesTotal", actual_complexity AS "actualComplexity",
   untested_paths AS "untestedPaths", crap`;
 
+/**
+ * How many functions match a filter, remembered per snapshot and filter: the filter columns of
+ * a ready snapshot never change, so paging and re-sorting need not count again.
+ */
+export class FunctionCounts {
+  private readonly counts = new Map<string, number>();
+
+  constructor(private readonly maxEntries = 5000) {}
+
+  async get(key: string, count: () => Promise<number>): Promise<number> {
+    const hit = this.counts.get(key);
+    if (hit !== undefined) return hit;
+    const total = await count();
+    this.counts.set(key, total);
+    if (this.counts.size > this.maxEntries) this.counts.delete(this.counts.keys().next().value!);
+    return total;
+  }
+}
+
 /** One page of a snapshot's functions, sorted and filtered in the database. */
-export async function listFunctions(dataSource: DataSource, snapshotId: string, query: FunctionQuery) {
+export async function listFunctions(dataSource: DataSource, snapshotId: string, query: FunctionQuery, counts = new FunctionCounts()) {
   const where = ['snapshot_id = $1'];
   const params: unknown[] = [snapshotId];
   const add = (sql: string, value: unknown) => {
@@ -52,9 +71,9 @@ export async function listFunctions(dataSource: DataSource, snapshotId: string, 
   const order = `${SORTABLE[query.sort]} ${query.order.toUpperCase()} NULLS LAST, function_id ASC`;
   const offset = (query.page - 1) * query.pageSize;
   const whereSql = where.join(' AND ');
-  const [items, [{ total }]] = await Promise.all([
+  const [items, total] = await Promise.all([
     dataSource.query(`SELECT ${ROW_COLUMNS} FROM function_metric WHERE ${whereSql} ORDER BY ${order} LIMIT ${query.pageSize} OFFSET ${offset}`, params),
-    dataSource.query(`SELECT count(*)::int AS total FROM function_metric WHERE ${whereSql}`, params),
+    counts.get(JSON.stringify([whereSql, params]), async () => (await dataSource.query(`SELECT count(*)::int AS total FROM function_metric WHERE ${whereSql}`, params))[0].total as number),
   ]);
   return { items, total, page: query.page, pageSize: query.pageSize, sort: query.sort, order: query.order };
 }

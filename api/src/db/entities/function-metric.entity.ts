@@ -11,6 +11,7 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
 @Index('ix_function_metric_file', ['snapshotId', 'file'])
 @Index('ix_function_metric_folder', ['snapshotId', 'folder'])
 @Index('ix_function_metric_cluster', ['snapshotId', 'cluster'])
+@Index('ix_function_metric_band', ['snapshotId', 'band', 'cyclomatic'])
 export class FunctionMetric {
   @snapshotKey('function_metric')
   snapshotId!: string;

@@ -4,11 +4,12 @@ import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import { Snapshot } from '../../db/entities';
 import { audit } from '../../services/audit';
-import { functionDetail, functionQuerySchema, listFunctions } from '../../services/function-queries';
+import { FunctionCounts, functionDetail, functionQuerySchema, listFunctions } from '../../services/function-queries';
 import { gravityQuerySchema, gravityRanking, levelSchema, listModules, moduleGraph, moduleGraphQuerySchema } from '../../services/module-queries';
 import { readySnapshot, requireModuleMap, snapshotInWorkspace } from '../../services/snapshot-access';
 import type { SnapshotCache } from '../../services/snapshot-cache';
 import { exportSnapshot, importCoverageReport } from '../../services/snapshot-files';
+import { ResponseCache } from '../../services/response-cache';
 import { toSnapshotSummary } from '../../services/snapshot-summary';
 import { allow } from '../policy';
 import { validate } from '../validate';
@@ -21,12 +22,18 @@ const levelQuery = z.object({ level: levelSchema.default('folder') }).strict();
 const exportQuery = z.object({ format: z.enum(['json', 'sarif', 'csv', 'graphml']), level: levelSchema.default('folder') }).strict();
 const coverageQuery = z.object({ fileName: z.string().max(255).default('coverage') }).strict();
 
+/** Module graphs kept as finished JSON: a few large maps, bounded by bytes. */
+const GRAPH_CACHE_ENTRIES = 16;
+const GRAPH_CACHE_BYTES = 64 * 1024 * 1024;
+
 /** Coverage reports are text; a big monorepo's lcov stays well under this. */
 const COVERAGE_LIMIT = '100mb';
 
 /** /api/snapshots/:id — one snapshot: state, live progress, its analysis read back, coverage, exports. */
 export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Router {
   const router = Router();
+  const graphCache = new ResponseCache(GRAPH_CACHE_ENTRIES, GRAPH_CACHE_BYTES);
+  const functionCounts = new FunctionCounts();
   const ready = async (req: import('express').Request) => readySnapshot(dataSource, viewerOf(req).workspace.id, validate(idParams, req.params, 'params').id);
 
   router.get('/:id', allow('snapshot.status'), async (req, res) => {
@@ -50,7 +57,7 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
   });
   router.get('/:id/functions', allow('snapshot.read'), async (req, res) => {
     const s = await ready(req);
-    const page = await listFunctions(dataSource, s.id, validate(functionQuerySchema, req.query, 'query'));
+    const page = await listFunctions(dataSource, s.id, validate(functionQuerySchema, req.query, 'query'), functionCounts);
     res.json({ ...page, limit: (s.settings as { limit?: number }).limit ?? 10 });
   });
   router.get('/:id/functions/:functionId', allow('snapshot.read'), async (req, res) => {
@@ -68,7 +75,8 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
     const s = await ready(req);
     requireModuleMap(s);
     const q = validate(moduleGraphQuerySchema, req.query, 'query');
-    res.json(await moduleGraph(dataSource, s.id, q.level, q.minWeight));
+    // A ready snapshot's module graph never changes: build its JSON once.
+    res.type('json').send(await graphCache.get(`${s.id}|${q.level}|${q.minWeight}`, () => moduleGraph(dataSource, s.id, q.level, q.minWeight)));
   });
   router.get('/:id/gravity', allow('snapshot.read'), async (req, res) => {
     const s = await ready(req);
