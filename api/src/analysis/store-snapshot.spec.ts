@@ -28,6 +28,16 @@ describe('storeSnapshot and loadSnapshot', () => {
     expect(analysed.calls!.length).toBeGreaterThan(0);
   });
 
+  it('should keep text with backslashes, tabs, line breaks and a literal \\N intact', async () => {
+    const { snapshot } = await createQueuedSnapshot(dataSource, workspaceId);
+    const tricky = 'const a = "x\\y";\tif (a) {\r\n  return "\\N";\n}';
+    const withSource = { ...analysed, functions: analysed.functions.map((f, i) => (i === 0 ? { ...f, source: tricky, qualifiedName: 'odd\\name\t1' } : f)) };
+    await storeSnapshot(dataSource, snapshot.id, withSource);
+    const loaded = await loadSnapshot(dataSource, snapshot.id, { graphs: true });
+    expect(loaded.functions[0].source).toBe(tricky);
+    expect(loaded.functions[0].qualifiedName).toBe('odd\\name\t1');
+  });
+
   it('should mark the snapshot ready with its totals, and place functions in folders and clusters', async () => {
     const { snapshot } = await createQueuedSnapshot(dataSource, workspaceId);
     await storeSnapshot(dataSource, snapshot.id, analysed);
