@@ -180,7 +180,7 @@ export async function writeCoverage(manager: EntityManager, snapshotId: string, 
     [snapshotId, ...[(r: FunctionRow) => r.f.id, ...coverageColumns.map((c) => c.value)].map((value) => rows.map((r) => value(r) ?? null))],
   );
   await manager.query(
-    `UPDATE function_detail d SET coverage_outcomes = t.o::jsonb
+    `UPDATE function_detail d SET coverage_outcomes = t.o::json
        FROM unnest($2::text[], $3::text[]) AS t(id, o)
       WHERE d.snapshot_id = $1 AND d.function_id = t.id`,
     [snapshotId, rows.map((r) => r.f.id), rows.map((r) => (r.f.coverage ? JSON.stringify(r.f.coverage.outcomes) : null))],
