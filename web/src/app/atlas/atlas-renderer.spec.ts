@@ -1,8 +1,7 @@
 import Graph from 'graphology';
 
 import type { AtlasGraph } from './atlas-graph';
-import { layoutBudgetMs, layoutMovement } from './atlas-renderer';
-import { capturePositions } from './position-cache';
+import { layoutBudgetMs, layoutMovement, nodePositions } from './atlas-renderer';
 
 function line(points: Array<[number, number]>): AtlasGraph {
   const graph: AtlasGraph = new Graph();
@@ -13,7 +12,8 @@ function line(points: Array<[number, number]>): AtlasGraph {
 describe('layout checks', () => {
   it('should measure the mean step of a node relative to the layout’s extent', () => {
     const graph = line([[0, 0], [100, 0]]);
-    const before = capturePositions(graph).xy;
+    const before = nodePositions(graph);
+    expect([...before]).toEqual([0, 0, 100, 0]);
     expect(layoutMovement(before, graph)).toBe(0);
 
     graph.setNodeAttribute('n1', 'x', 110);

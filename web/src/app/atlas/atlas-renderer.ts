@@ -77,5 +77,16 @@ export function layoutMovement(previous: Float32Array, graph: AtlasGraph): numbe
   return moved / i / extent;
 }
 
+/** The x, y pairs of the graph's nodes, in graph order (for `layoutMovement`). */
+export function nodePositions(graph: AtlasGraph): Float32Array {
+  const xy = new Float32Array(graph.order * 2);
+  let i = 0;
+  graph.forEachNode((_id, { x, y }) => {
+    xy[i++] = x;
+    xy[i++] = y;
+  });
+  return xy;
+}
+
 /** Below this movement per check (see `layoutMovement`) the layout is settled. */
 export const SETTLED_MOVEMENT = 0.002;

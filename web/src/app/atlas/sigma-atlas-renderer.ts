@@ -4,12 +4,14 @@ import FA2Layout from 'graphology-layout-forceatlas2/worker';
 import Sigma from 'sigma';
 
 import type { AtlasEdgeAttributes, AtlasGraph, AtlasNodeAttributes } from './atlas-graph';
-import { layoutMovement, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents } from './atlas-renderer';
+import { layoutMovement, nodePositions, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents } from './atlas-renderer';
 import { edgeLook, nodeLook, PLAIN_VIEW, type AtlasView } from './atlas-view';
-import { capturePositions } from './position-cache';
 
 /** How often a running layout is checked for settling. */
 const CHECK_EVERY_MS = 400;
+/** How often the map shows the layout's progress: small maps animate, large ones step. */
+const SMALL_SHOW_EVERY_MS = 60;
+const LARGE_SHOW_EVERY_MS = 1_200;
 
 /** Draws the map with sigma (WebGL) and lays it out with ForceAtlas2 in a web worker. */
 export async function createSigmaAtlasRenderer(
@@ -68,25 +70,41 @@ export async function createSigmaAtlasRenderer(
     runLayout(maxMs) {
       stopLayout();
       if (graph.order === 0) return Promise.resolve();
-      const running = new FA2Layout(graph, {
-        settings: { ...forceAtlas2.inferSettings(graph), edgeWeightInfluence: 0.5, slowDown: 2 },
+      // The worker writes positions into a copy that nothing draws; the map takes them over at
+      // a pace its size allows, so a 20,000-module map is not re-indexed on every iteration.
+      const working = graph.copy();
+      const running = new FA2Layout(working, {
+        settings: { ...forceAtlas2.inferSettings(working), edgeWeightInfluence: 0.5, slowDown: 2 },
         getEdgeWeight: 'weight',
       });
       layout = running;
+      const showEvery = graph.order + graph.size > 3_000 ? LARGE_SHOW_EVERY_MS : SMALL_SHOW_EVERY_MS;
+      const show = () =>
+        graph.updateEachNodeAttributes(
+          (id, attributes) => {
+            attributes.x = working.getNodeAttribute(id, 'x');
+            attributes.y = working.getNodeAttribute(id, 'y');
+            return attributes;
+          },
+          { attributes: ['x', 'y'] },
+        );
       return new Promise<void>((resolve) => {
-        let previous = capturePositions(graph).xy;
+        let previous = nodePositions(working);
         let quietChecks = 0;
         const check = setInterval(() => {
-          const movement = layoutMovement(previous, graph);
-          previous = capturePositions(graph).xy;
+          const movement = layoutMovement(previous, working);
+          previous = nodePositions(working);
           quietChecks = movement < SETTLED_MOVEMENT ? quietChecks + 1 : 0;
           if (quietChecks >= 2) finish();
         }, CHECK_EVERY_MS);
+        const showing = setInterval(show, showEvery);
         const deadline = setTimeout(() => finish(), maxMs);
         const finish = () => {
           clearInterval(check);
+          clearInterval(showing);
           clearTimeout(deadline);
           running.kill();
+          show();
           if (layout === running) layout = null;
           finishLayout = null;
           resolve();
