@@ -42,6 +42,12 @@ export const routes: Routes = [
         canActivate: [requireRole(...ALL_ROLES)],
         loadComponent: () => import('./flow/flow').then((m) => m.Flow),
       },
+      {
+        path: 'snapshots/:snapshotId/atlas',
+        title: 'Atlas · Seamline',
+        canActivate: [requireRole(...ALL_ROLES)],
+        loadComponent: () => import('./atlas/atlas').then((m) => m.Atlas),
+      },
     ],
   },
   { path: '**', redirectTo: 'overview' },

@@ -27,6 +27,7 @@ export interface NavLink extends NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { path: '/overview', label: 'Overview', icon: 'dashboard', roles: ALL_ROLES },
   // — snapshot screens: one entry each below —
+  { snapshotScreen: 'atlas', label: 'Atlas', icon: 'hub', roles: ALL_ROLES },
   { snapshotScreen: 'functions', label: 'Functions', icon: 'functions', roles: ALL_ROLES },
   { snapshotScreen: 'gravity', label: 'Gravity', icon: 'orbit', roles: ALL_ROLES },
 ];
