@@ -37,9 +37,12 @@ describe('signing in through the identity-provider fake', () => {
       await expect(toolbar.textContent()).resolves.toContain(DEMO_WORKSPACE.name);
       await expect(toolbar.textContent()).resolves.toContain(person.displayName);
       await expect(toolbar.textContent()).resolves.toContain(person.role);
-      // Only screens that exist are offered.
-      const nav = page.getByRole('navigation');
+      // Without a snapshot in view only the Overview is a link; the snapshot screens wait, disabled.
+      const nav = page.getByRole('navigation', { name: 'Screens' });
       await expect(nav.getByRole('link').allTextContents()).resolves.toEqual([expect.stringContaining('Overview')]);
+      await expect(nav.locator('a[aria-disabled="true"]').allTextContents()).resolves.toEqual([
+        expect.stringContaining('Atlas'), expect.stringContaining('Functions'), expect.stringContaining('Gravity'),
+      ]);
       // The workspace's codebases, or a clear empty state (other end-to-end tests upload into this workspace).
       await page.getByText(/No codebases yet/).or(page.getByRole('table')).first().waitFor();
       await saveScreenshot(page, `overview-${person.role}`);
