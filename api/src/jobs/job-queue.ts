@@ -41,14 +41,32 @@ export interface ProbeResult {
 
 /**
  * Starts a pg-boss client on the application database (schema `pgboss`) and makes sure every
- * queue exists; pg-boss 10 refuses to send to or work on a queue that was not created.
+ * queue exists; pg-boss 10 refuses to send to or work on a queue that was not created. The API,
+ * the workers and the demo seed start at the same moment and may all create the schema and the
+ * queues at once; PostgreSQL can then end one of them with a deadlock, which is retried.
  */
-export async function startJobQueue(databaseUrl: string, onError: (err: Error) => void): Promise<PgBoss> {
-  const boss = new PgBoss({ connectionString: databaseUrl, max: 4, application_name: 'seamline-queue' });
-  boss.on('error', onError);
-  await boss.start();
-  for (const name of Object.values(QUEUES)) {
-    if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, policy: 'standard', retentionMinutes: 60 });
+export async function startJobQueue(databaseUrl: string, onError: (err: Error) => void, schema = 'pgboss'): Promise<PgBoss> {
+  for (let attempt = 1; ; attempt++) {
+    const boss = new PgBoss({ connectionString: databaseUrl, schema, max: 4, application_name: 'seamline-queue' });
+    boss.on('error', onError);
+    try {
+      await boss.start();
+      for (const name of Object.values(QUEUES)) {
+        if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, policy: 'standard', retentionMinutes: 60 });
+      }
+      return boss;
+    } catch (err) {
+      await boss.stop({ graceful: false, wait: true }).catch(() => undefined);
+      if (attempt >= START_ATTEMPTS || !isConcurrentSetupConflict(err)) throw err;
+      await new Promise((resolve) => setTimeout(resolve, 200 * attempt + Math.random() * 300));
+    }
   }
-  return boss;
+}
+
+const START_ATTEMPTS = 6;
+
+/** Deadlocks and unique violations are what two processes creating the same schema or queue run into. */
+export function isConcurrentSetupConflict(err: unknown): boolean {
+  const code = (err as { code?: string } | null)?.code;
+  return code === '40P01' || code === '23505' || /deadlock detected|duplicate key/i.test(err instanceof Error ? err.message : String(err));
 }
