@@ -32,7 +32,7 @@ describe('signing in through the identity-provider fake', () => {
       await page.getByRole('button', { name: new RegExp(person.displayName) }).click();
 
       await page.waitForURL('**/overview');
-      await page.getByRole('heading', { name: 'Overview' }).waitFor();
+      await page.getByRole('heading', { name: 'Overview', exact: true }).waitFor();
       const toolbar = page.locator('mat-toolbar');
       await expect(toolbar.textContent()).resolves.toContain(DEMO_WORKSPACE.name);
       await expect(toolbar.textContent()).resolves.toContain(person.displayName);
@@ -49,7 +49,7 @@ describe('signing in through the identity-provider fake', () => {
 
       // A deep link survives a reload.
       await page.reload();
-      await page.getByRole('heading', { name: 'Overview' }).waitFor();
+      await page.getByRole('heading', { name: 'Overview', exact: true }).waitFor();
       expect(new URL(page.url()).pathname).toBe('/overview');
 
       await page.getByRole('button', { name: /sign out/i }).click();

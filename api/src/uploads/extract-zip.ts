@@ -18,12 +18,16 @@ import { inspectZip } from './zip-inspection';
 export async function extractZip(file: string, destDir: string, limits: UploadLimits): Promise<ZipSummary> {
   await inspectZip(file, limits);
   const writer = await SafeTreeWriter.create(destDir);
+  // The entry being unpacked: a broken entry's inflate error can also surface through the zip's
+  // own entry iteration (yauzl re-emits it), and must still name the entry.
+  let current: CheckedEntry | undefined;
   try {
     const zip = await openZip(file, limits);
     try {
       const checker = new ZipEntryChecker(limits);
       for await (const entry of zipEntries(zip)) {
         const checked = checker.check(entry);
+        current = checked;
         if (checked.kind === 'folder') await writer.folder(checked.segments);
         else await unpackFile(zip, entry, checked, writer);
       }
@@ -33,7 +37,7 @@ export async function extractZip(file: string, destDir: string, limits: UploadLi
     }
   } catch (err) {
     await rm(writer.root, { recursive: true, force: true });
-    throw err;
+    throw current ? asDamagedData(err, current) : err;
   }
 }
 
@@ -59,8 +63,13 @@ async function openEntry(zip: ZipFile, entry: Entry, checked: CheckedEntry): Pro
 /** Data that will not inflate is a damaged zip; disk and other server faults stay as they are. */
 function asDamagedData(err: unknown, checked: CheckedEntry): unknown {
   if (err instanceof UploadRefusedError) return err;
+  // Operating-system faults (ENOSPC, EIO, EACCES…) are ours; anything else that breaks while an
+  // entry's bytes are read (zlib's Z_* codes, or a zlib message without a code when the error
+  // surfaces through another stream) is the zip's data.
   const code = (err as NodeJS.ErrnoException | undefined)?.code;
-  if (typeof code === 'string' && code.startsWith('Z_')) {
+  const systemFault = typeof code === 'string' && /^E[A-Z]+$/.test(code);
+  // (Not `instanceof Error`: errors made by Node's own zlib may come from another realm under test runners.)
+  if (!systemFault && typeof (err as Error | null)?.message === 'string') {
     return refuseEntry('damaged_zip', checked.name, `its data cannot be unpacked (${(err as Error).message}); the zip is damaged.`);
   }
   return err;
