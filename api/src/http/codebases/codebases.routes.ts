@@ -15,15 +15,13 @@ import { toSnapshotSummary } from '../../services/snapshot-summary';
 import { receiveZipUpload } from '../../uploads/receive-upload';
 import { DEFAULT_UPLOAD_LIMITS } from '../../uploads/upload-limits';
 import { inspectZip } from '../../uploads/zip-inspection';
+import { branchField, codebaseNameField, commitField } from '../fields';
 import { allow } from '../policy';
 import { validate } from '../validate';
 import { memberOf, viewerOf } from '../viewer';
 
 const idParams = z.object({ id: z.uuid('must be a codebase id') });
-const newCodebase = z.object({ name: z.string().trim().min(1).max(200).regex(/^[^\u0000-\u001f]+$/, 'must not hold control characters'), description: z.string().max(2000).default('') }).strict();
-/** Commit and branch as CI tools print them. */
-export const commitField = z.string().regex(/^[0-9A-Za-z._-]{1,64}$/, 'must be 1–64 letters, digits, dots, dashes or underscores');
-export const branchField = z.string().min(1).max(255).regex(/^[^\u0000-\u001f]+$/, 'must not hold control characters');
+const newCodebase = z.object({ name: codebaseNameField, description: z.string().max(2000).default('') }).strict();
 const uploadFields = z.object({ commit: commitField.optional(), branch: branchField.optional() }).strict();
 
 export interface CodebaseRouteDeps {

@@ -4,14 +4,15 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { BadRequestError } from '../../errors';
 import { codebaseByName, queueSnapshot } from '../../services/snapshot-intake';
-import { branchField, commitField, type CodebaseRouteDeps } from '../codebases/codebases.routes';
+import type { CodebaseRouteDeps } from '../codebases/codebases.routes';
+import { branchField, codebaseNameField, commitField } from '../fields';
 import { allow } from '../policy';
 import { validate } from '../validate';
 import { viewerOf } from '../viewer';
 import { receiveBody } from './receive-body';
 
 const pushQuery = z.object({
-  codebase: z.string().trim().min(1).max(200).regex(/^[^\u0000-\u001f]+$/, 'must not hold control characters'),
+  codebase: codebaseNameField,
   commit: commitField.optional(),
   branch: branchField.optional(),
 }).strict();
