@@ -1,4 +1,3 @@
-import './structured-clone-for-jsdom';
 
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 

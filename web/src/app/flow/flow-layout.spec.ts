@@ -1,4 +1,3 @@
-import './structured-clone-for-jsdom';
 import type { CompactGraph } from './flow-types';
 import { describeBlock, layoutFlowGraph, lineRange, MAX_TITLE_CHARS, svgPath } from './flow-layout';
 import { loadVanGraph } from './flow-fixtures';

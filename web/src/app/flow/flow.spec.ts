@@ -1,4 +1,3 @@
-import './structured-clone-for-jsdom';
 
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
