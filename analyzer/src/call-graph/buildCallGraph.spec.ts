@@ -158,7 +158,9 @@ describe('buildCallGraph on hand-verified fixtures', () => {
     it('reports the files it could not get through and keeps the others', () => {
       const graph = buildCallGraph({ root, files: ['deep.ts', 'deeper.ts', 'good.ts'], settings: DEFAULT_SETTINGS });
       expect(graph.failedFiles.map((f) => f.file)).toEqual(['deep.ts', 'deeper.ts']);
-      expect(graph.failedFiles[0].detail).toMatch(/^analyzer\/call-graph: resolving calls failed: RangeError: Maximum call stack/);
+      // 700 levels sit near both limits: how much stack the jest worker has left decides whether
+      // the checker or already the parser runs out, so either phase is reported for this file.
+      expect(graph.failedFiles[0].detail).toMatch(/^analyzer\/call-graph: (resolving calls|parsing) failed: RangeError: Maximum call stack/);
       expect(graph.failedFiles[1].detail).toMatch(/^analyzer\/call-graph: parsing failed: RangeError: Maximum call stack/);
       expect(graph.calls).toHaveLength(1);
       expect(graph.imports).toEqual([]);
