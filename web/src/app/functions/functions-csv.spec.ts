@@ -10,6 +10,11 @@ describe('toCsv', () => {
     const csv = toCsv(['name'], [['a,b'], ['say "hi"'], ['two\nlines'], ['cr\rhere'], [undefined]]);
     expect(csv).toBe('name\r\n"a,b"\r\n"say ""hi"""\r\n"two\nlines"\r\n"cr\rhere"\r\n\r\n');
   });
+
+  it('should keep text a spreadsheet would run as a formula from running, but leave numbers alone', () => {
+    const csv = toCsv(['v'], [['=HYPERLINK("x")'], ['+1'], ['-cmd'], ['@SUM(A1)'], ['\tx'], [-3], ['a=b']]);
+    expect(csv).toBe(`v\r\n"'=HYPERLINK(""x"")"\r\n'+1\r\n'-cmd\r\n'@SUM(A1)\r\n'\tx\r\n-3\r\na=b\r\n`);
+  });
 });
 
 describe('functionsCsv', () => {

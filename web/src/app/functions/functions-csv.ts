@@ -55,14 +55,18 @@ export function functionsCsv(rows: readonly FunctionRow[], withCoverage: boolean
 /**
  * CSV text as RFC 4180 describes it: CRLF line breaks (also after the last record), fields
  * holding a comma, double quote, CR or LF enclosed in double quotes, inner quotes doubled.
- * Null and undefined become empty fields.
+ * Null and undefined become empty fields. Text a spreadsheet would run as a formula (starting
+ * with = + - @, a tab or CR) gets a leading single quote, as the analyzer's and the server's CSV
+ * do (OWASP "CSV Injection", common practice): names and paths come from the scanned code.
  */
 export function toCsv(header: readonly string[], records: readonly (readonly CsvValue[])[]): string {
   return [header, ...records].map((fields) => fields.map(csvField).join(',') + '\r\n').join('');
 }
 
+const FORMULA_START = /^[=+\-@\t\r]/;
+
 function csvField(value: CsvValue): string {
   if (value === null || value === undefined) return '';
-  const text = String(value);
+  const text = typeof value === 'string' && FORMULA_START.test(value) ? `'${value}` : String(value);
   return /[",\r\n]/.test(text) ? `"${text.replaceAll('"', '""')}"` : text;
 }
