@@ -67,6 +67,12 @@ describe('an analysis through the API', () => {
     const graph = await request(t.app).get(`/api/snapshots/${snapshotId}/module-graph?level=folder`).set(viewer.headers).expect(200);
     expect(graph.body.nodes.map((n: { id: string }) => n.id)).toEqual(['folder:src/orders', 'folder:src/pricing']);
     expect(graph.body.edges.length).toBeGreaterThan(0);
+    // Sent gzipped to clients that accept it (supertest asks and inflates), plain to others.
+    expect(graph.headers['content-encoding']).toBe('gzip');
+    expect(graph.headers['vary']).toMatch(/Accept-Encoding/i);
+    const plain = await request(t.app).get(`/api/snapshots/${snapshotId}/module-graph?level=folder`).set(viewer.headers).set('Accept-Encoding', 'identity').expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.body).toEqual(graph.body);
     const gravity = await request(t.app).get(`/api/snapshots/${snapshotId}/gravity?level=folder`).set(viewer.headers).expect(200);
     expect(gravity.body.modules[0]).toMatchObject({ id: 'folder:src/orders', gravityRank: 1 });
     expect(gravity.body.modules[0].reasons.length).toBeGreaterThan(0);

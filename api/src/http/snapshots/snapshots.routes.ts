@@ -10,6 +10,7 @@ import { readySnapshot, requireModuleMap, snapshotInWorkspace } from '../../serv
 import type { SnapshotCache } from '../../services/snapshot-cache';
 import { exportSnapshot, importCoverageReport } from '../../services/snapshot-files';
 import { ResponseCache } from '../../services/response-cache';
+import { sendCachedJson } from '../send-cached-json';
 import { toSnapshotSummary } from '../../services/snapshot-summary';
 import { allow } from '../policy';
 import { validate } from '../validate';
@@ -76,7 +77,7 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
     requireModuleMap(s);
     const q = validate(moduleGraphQuerySchema, req.query, 'query');
     // A ready snapshot's module graph never changes: build its JSON once.
-    res.type('json').send(await graphCache.get(`${s.id}|${q.level}|${q.minWeight}`, () => moduleGraph(dataSource, s.id, q.level, q.minWeight)));
+    sendCachedJson(req, res, await graphCache.get(`${s.id}|${q.level}|${q.minWeight}`, () => moduleGraph(dataSource, s.id, q.level, q.minWeight)));
   });
   router.get('/:id/gravity', allow('snapshot.read'), async (req, res) => {
     const s = await ready(req);
