@@ -28,11 +28,13 @@ function measure(tasks, rounds) {
   return Object.fromEntries(Object.entries(runs).map(([k, rs]) => [k, { ms: median(rs.map((r) => r.ms)), wall: median(rs.map((r) => r.wallMs)), mb: median(rs.map((r) => r.maxRssKb)) / 1024, last: rs[rs.length - 1] }]));
 }
 
-// SEAMLINE_BENCH_PART=scan, =map, =store, =api-load, =workers runs one part only; =server the last three.
+// SEAMLINE_BENCH_PART=scan, =map, =store, =api-load, =workers, =atlas runs one part only; =server
+// the store, api-load and workers parts.
 const PART = process.env.SEAMLINE_BENCH_PART ?? 'all';
 const SERVER_PARTS = { store: 'server-store.mjs', 'api-load': 'server-api-load.mjs', workers: 'server-workers.mjs' };
+const STACK_PARTS = { ...SERVER_PARTS, atlas: 'atlas-browser.mjs' };
 const runs = (part) => PART === 'all' || PART === part || (PART === 'server' && part in SERVER_PARTS);
-if (!['all', 'scan', 'map', 'server', ...Object.keys(SERVER_PARTS)].includes(PART)) throw new Error(`Unknown SEAMLINE_BENCH_PART ${PART}`);
+if (!['all', 'scan', 'map', 'server', ...Object.keys(STACK_PARTS)].includes(PART)) throw new Error(`Unknown SEAMLINE_BENCH_PART ${PART}`);
 
 if (runs('scan') || runs('map')) {
   const build = spawnSync(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.analyzer.json'], { cwd: root, stdio: 'inherit' });
@@ -98,15 +100,17 @@ const cv = lastJson('carve.cjs');
 console.log(`\nCarve-plan evaluation on 5,000 modules: prepare ${f(cv.prepareMs)} ms once; evaluate median ${f(cv.ms)} ms over ${cv.edits} edits (first ${f(cv.coldEvaluateMs)} ms); target under 100 ms: ${cv.under100ms ? 'met' : 'not met'}`);
 }
 
-// The server: storing a snapshot, reads under load, analysis throughput per worker count. Each
-// part starts its own PostgreSQL cluster and processes and stops them, whatever happens.
-const serverParts = Object.keys(SERVER_PARTS).filter(runs);
+// The server: storing a snapshot, reads under load, analysis throughput per worker count; and
+// the Atlas in a browser against that server. Each part starts its own PostgreSQL cluster and
+// processes and stops them, whatever happens.
+const serverParts = Object.keys(STACK_PARTS).filter(runs);
 if (serverParts.length > 0) {
-  const { buildBenchServer } = await import('./bench/server-harness.mjs');
+  const { buildBenchServer, buildBenchWeb } = await import('./bench/server-harness.mjs');
   buildBenchServer();
+  if (serverParts.includes('atlas')) buildBenchWeb();
   for (const part of serverParts) {
     console.log(`\n${part}:`);
-    const run = spawnSync(process.execPath, [path.join(root, 'scripts/bench', SERVER_PARTS[part])], { cwd: root, stdio: 'inherit' });
+    const run = spawnSync(process.execPath, [path.join(root, 'scripts/bench', STACK_PARTS[part])], { cwd: root, stdio: 'inherit' });
     if (run.status !== 0) throw new Error(`the ${part} benchmark failed (exit ${run.status ?? run.signal})`);
   }
 }

@@ -23,6 +23,19 @@ export function buildBenchServer() {
   run(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.server.json', '--outDir', SERVER_DIST], { cwd: root });
 }
 
+/** The web app built for the browser benchmark (the API serves dist/bench-web/browser). */
+export const WEB_DIST = path.join(root, 'dist/bench-web');
+
+/** Builds the Angular app as `npm start` does, into dist/bench-web. */
+export function buildBenchWeb() {
+  progress('building the web app (ng build → dist/bench-web)…');
+  const configuration = process.env.SEAMLINE_BENCH_WEB_CONFIG ?? 'production';
+  run(path.join(root, 'node_modules/.bin/ng'), ['build', 'web', '--configuration', configuration, '--output-path', WEB_DIST], {
+    cwd: root,
+    env: { ...process.env, NG_CLI_ANALYTICS: 'false', NG_FORCE_TTY: 'false' },
+  });
+}
+
 /** A module of the compiled server, e.g. serverModule('api/src/analysis/store-snapshot.js'). */
 export function serverModule(relative) {
   const file = path.join(SERVER_DIST, relative);

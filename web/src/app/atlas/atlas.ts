@@ -25,6 +25,7 @@ import { catchError, map, of, startWith, switchMap } from 'rxjs';
 import { apiErrorMessage } from '../api-error-message';
 import { buildAtlasModel, heaviestLinks, neighbourhood, seedPositions, type AtlasModel } from './atlas-graph';
 import { ATLAS_RENDERER, layoutBudgetMs, type AtlasRenderer } from './atlas-renderer';
+import { markAtlas, markFirstFrame } from './atlas-timing';
 import type { AtlasView } from './atlas-view';
 import { moduleLabel, MODULE_LEVELS, parseLevel, type ModuleLevel, type ModuleRecord } from './module-graph';
 import { ModuleGraphApi } from './module-graph-api';
@@ -164,7 +165,10 @@ export class Atlas {
       .pipe(
         switchMap(({ id, level }) =>
           this.api.get(id, level).pipe(
-            map((graph): AtlasState => ({ kind: 'loaded', model: buildAtlasModel(graph) })),
+            map((graph): AtlasState => {
+              markAtlas('data');
+              return { kind: 'loaded', model: buildAtlasModel(graph) };
+            }),
             catchError((error: unknown) => of<AtlasState>({ kind: 'failed', message: apiErrorMessage(error) })),
             startWith<AtlasState>({ kind: 'loading' }),
           ),
@@ -297,6 +301,7 @@ export class Atlas {
       return;
     }
     drawing.renderer = renderer;
+    markFirstFrame();
     renderer.setView(this.view());
     this.renderer.set(renderer);
     const selected = this.selectedId();
@@ -307,7 +312,9 @@ export class Atlas {
 
   private async layOut(renderer: AtlasRenderer, model: AtlasModel, drawing: { cancelled: boolean }) {
     this.layoutState.set('running');
+    markAtlas('layout-start');
     await renderer.runLayout(layoutBudgetMs(model.graph.order));
+    markAtlas('layout-end');
     if (drawing.cancelled || this.renderer() !== renderer) return;
     this.layoutState.set('settled');
     const key = positionKey(this.snapshotId(), this.currentLevel());
