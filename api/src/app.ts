@@ -1,4 +1,3 @@
-import connectPgSimple from 'connect-pg-simple';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -7,6 +6,7 @@ import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import { authRoutes } from './auth/auth.routes';
 import { authenticate } from './auth/authenticate';
+import { SessionStore } from './auth/session-store';
 import type { Config } from './config';
 import { auditRoutes } from './http/audit/audit.routes';
 import { carvePlanRoutes } from './http/carve-plans/carve-plans.routes';
@@ -81,12 +81,11 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  const PgStore = connectPgSimple(session);
   app.use(
     session({
       name: SESSION_COOKIE,
       secret: config.sessionSecret,
-      store: new PgStore({ pool: deps.sessionPool, tableName: 'http_session', createTableIfMissing: false }),
+      store: new SessionStore(deps.sessionPool),
       resave: false,
       saveUninitialized: false,
       rolling: true,
