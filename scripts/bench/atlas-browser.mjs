@@ -33,6 +33,12 @@ const MAPS = SIZES.map((files) => ({
  * SEAMLINE_BENCH_WEB_CONFIG=development for readable function names).
  */
 const PROFILE = process.env.SEAMLINE_BENCH_PROFILE === '1';
+/**
+ * The flags the end-to-end tests use (`--disable-gpu`: software compositing, so every frame with
+ * a WebGL canvas is read back to the main thread); SEAMLINE_BENCH_GPU_COMPOSITING=1 composites
+ * on SwiftShader instead, closer to a browser with a graphics card.
+ */
+const GPU_FLAGS = process.env.SEAMLINE_BENCH_GPU_COMPOSITING === '1' ? ['--enable-unsafe-swiftshader'] : ['--disable-gpu'];
 
 /** What one visit measured (ms from the start of navigation). */
 async function visit(browser, base, cookie, snapshotId, screenshot, profileFile) {
@@ -113,7 +119,7 @@ await runPart('atlas-browser', async (stack) => {
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+    args: ['--no-sandbox', ...GPU_FLAGS, '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
   });
   const results = {};
   try {

@@ -33,18 +33,25 @@ export interface AtlasRenderer {
   destroy(): void;
 }
 
+/** What the map needs to know when it is created. */
+export interface AtlasRendererOptions {
+  /** A layout will run at once (no saved positions): large maps then start without links. */
+  layoutFollows?: boolean;
+}
+
 /** Creates a renderer drawing `graph` into `container`. */
 export type AtlasRendererFactory = (
   container: HTMLElement,
   graph: AtlasGraph,
   events: AtlasRendererEvents,
+  options?: AtlasRendererOptions,
 ) => Promise<AtlasRenderer>;
 
 /** The renderer the Atlas uses; sigma is loaded only when a map is first drawn. */
 export const ATLAS_RENDERER = new InjectionToken<AtlasRendererFactory>('Atlas renderer', {
   providedIn: 'root',
-  factory: () => (container, graph, events) =>
-    import('./sigma-atlas-renderer').then((m) => m.createSigmaAtlasRenderer(container, graph, events)),
+  factory: () => (container, graph, events, options) =>
+    import('./sigma-atlas-renderer').then((m) => m.createSigmaAtlasRenderer(container, graph, events, options)),
 });
 
 /** How long the layout may run for a map of `order` modules (larger maps get longer, up to 20 s). */

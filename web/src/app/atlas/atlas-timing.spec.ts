@@ -1,4 +1,4 @@
-import { markAtlas, markFirstFrame } from './atlas-timing';
+import { afterNextPaint, markAtlas } from './atlas-timing';
 
 describe('atlas timing marks', () => {
   let marks: string[];
@@ -20,16 +20,20 @@ describe('atlas timing marks', () => {
     expect(marks).toEqual(['seamline:atlas:layout-start']);
   });
 
-  it('should mark the first frame only after the browser has painted', () => {
-    jest.useFakeTimers({ doNotFake: ['performance'] });
+  it('should wait for the next frame and the task after it', async () => {
+    jest.useFakeTimers();
     const frames: FrameRequestCallback[] = [];
     const raf = jest.spyOn(window, 'requestAnimationFrame').mockImplementation((callback) => frames.push(callback));
-    markFirstFrame();
-    expect(marks).toEqual([]);
+    let painted = false;
+    const waiting = afterNextPaint().then(() => (painted = true));
+    await Promise.resolve();
+    expect(painted).toBe(false);
     frames[0](0);
-    expect(marks).toEqual([]);
+    await Promise.resolve();
+    expect(painted).toBe(false);
     jest.runAllTimers();
-    expect(marks).toEqual(['seamline:atlas:first-frame']);
+    await waiting;
+    expect(painted).toBe(true);
     raf.mockRestore();
   });
 });

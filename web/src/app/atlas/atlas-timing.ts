@@ -14,9 +14,11 @@ export function markAtlas(mark: AtlasMark): void {
   globalThis.performance?.mark?.(atlasMarkName(mark));
 }
 
-/** Records `first-frame` once the browser has painted what sigma drew synchronously. */
-export function markFirstFrame(): void {
-  if (typeof requestAnimationFrame !== 'function') return markAtlas('first-frame');
-  // The frame painted after this callback is the first one with the map on it.
-  requestAnimationFrame(() => setTimeout(() => markAtlas('first-frame'), 0));
+/** Resolves once the browser has painted what was drawn so far (the next frame, then its task). */
+export function afterNextPaint(): Promise<void> {
+  return new Promise((resolve) => {
+    if (typeof requestAnimationFrame !== 'function') return void setTimeout(resolve, 0);
+    // A task queued from a frame callback runs after that frame has been produced.
+    requestAnimationFrame(() => setTimeout(resolve, 0));
+  });
 }

@@ -25,7 +25,7 @@ import { catchError, map, of, startWith, switchMap } from 'rxjs';
 import { apiErrorMessage } from '../api-error-message';
 import { buildAtlasModel, heaviestLinks, neighbourhood, seedPositions, type AtlasModel } from './atlas-graph';
 import { ATLAS_RENDERER, layoutBudgetMs, type AtlasRenderer } from './atlas-renderer';
-import { markAtlas, markFirstFrame } from './atlas-timing';
+import { afterNextPaint, markAtlas } from './atlas-timing';
 import type { AtlasView } from './atlas-view';
 import { moduleLabel, MODULE_LEVELS, parseLevel, type ModuleLevel, type ModuleRecord } from './module-graph';
 import { ModuleGraphApi } from './module-graph-api';
@@ -286,10 +286,12 @@ export class Atlas {
     if (!complete) seedPositions(model);
     let renderer: AtlasRenderer;
     try {
-      renderer = await this.createRenderer(host, model.graph, {
-        nodeClicked: (id) => this.select(id),
-        stageClicked: () => this.select(null),
-      });
+      renderer = await this.createRenderer(
+        host,
+        model.graph,
+        { nodeClicked: (id) => this.select(id), stageClicked: () => this.select(null) },
+        { layoutFollows: !complete },
+      );
     } catch {
       if (!drawing.cancelled) {
         this.notice.set('The map cannot be drawn in this browser (it needs WebGL). The module list still works.');
@@ -301,13 +303,15 @@ export class Atlas {
       return;
     }
     drawing.renderer = renderer;
-    markFirstFrame();
     renderer.setView(this.view());
     this.renderer.set(renderer);
     const selected = this.selectedId();
     if (selected) renderer.focusNode(selected);
     this.layoutState.set(complete ? 'saved' : 'idle');
-    if (!complete) await this.layOut(renderer, model, drawing);
+    // The map is on screen before the layout worker starts competing for the processor.
+    await afterNextPaint();
+    markAtlas('first-frame');
+    if (!complete && !drawing.cancelled) await this.layOut(renderer, model, drawing);
   }
 
   private async layOut(renderer: AtlasRenderer, model: AtlasModel, drawing: { cancelled: boolean }) {

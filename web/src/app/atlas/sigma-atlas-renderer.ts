@@ -4,7 +4,9 @@ import FA2Layout from 'graphology-layout-forceatlas2/worker';
 import Sigma from 'sigma';
 
 import type { AtlasEdgeAttributes, AtlasGraph, AtlasNodeAttributes } from './atlas-graph';
-import { layoutMovement, nodePositions, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents } from './atlas-renderer';
+import {
+  layoutMovement, nodePositions, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents, type AtlasRendererOptions,
+} from './atlas-renderer';
 import { edgeLook, nodeLook, PLAIN_VIEW, type AtlasView } from './atlas-view';
 
 /** How often a running layout is checked for settling. */
@@ -13,14 +15,35 @@ const CHECK_EVERY_MS = 400;
 const SMALL_SHOW_EVERY_MS = 60;
 const LARGE_SHOW_EVERY_MS = 1_200;
 
+/**
+ * Maps above this many modules plus links are "large": while their layout runs the links are
+ * not drawn (only the modules move; the links come back when it stops), so each step of the
+ * layout costs the browser a fraction of a full frame. Drawing every link of a 60,000-link map
+ * on each step would keep the main thread busy for as long as one frame takes to draw.
+ */
+export const LARGE_MAP = 3_000;
+
+/**
+ * A frame that took longer than this (drawing plus handing the picture to the screen) means
+ * this browser draws the map slowly — software WebGL, a weak graphics chip: the layout's steps
+ * are then not shown, only its result, so the page stays responsive while it runs.
+ */
+export const SLOW_FRAME_MS = 120;
+
 /** Draws the map with sigma (WebGL) and lays it out with ForceAtlas2 in a web worker. */
 export async function createSigmaAtlasRenderer(
   container: HTMLElement,
   graph: AtlasGraph,
   events: AtlasRendererEvents,
+  options: AtlasRendererOptions = {},
 ): Promise<AtlasRenderer> {
   let view: AtlasView = PLAIN_VIEW;
+  const largeMap = graph.order + graph.size > LARGE_MAP;
+  /** Links of a large map are hidden while it is laid out (also in its first frame when a layout follows). */
+  let linksHidden = largeMap && options.layoutFollows === true;
   const large = graph.order > 5_000 || graph.size > 20_000;
+  const frames = new FrameCost();
+  frames.beforeRender();
   const sigma = new Sigma<AtlasNodeAttributes, AtlasEdgeAttributes>(graph, container, {
     labelFont: "'IBM Plex Sans', system-ui, sans-serif",
     labelSize: 12,
@@ -36,18 +59,30 @@ export async function createSigmaAtlasRenderer(
       return look ? { ...data, ...look } : data;
     },
     edgeReducer: (edge, data) => {
+      if (linksHidden) return { ...data, hidden: true };
       if (view.selected === null && data.weight >= view.minWeight) return data;
       const [source, target] = graph.extremities(edge);
       const look = edgeLook(source, target, data, view);
       return look ? { ...data, ...look } : data;
     },
   });
+  // The constructor drew the first frame; later frames are timed from sigma's own events.
+  frames.afterRender();
+  sigma.on('beforeRender', () => frames.beforeRender());
+  sigma.on('afterRender', () => frames.afterRender());
   sigma.on('clickNode', ({ node }) => events.nodeClicked(node));
   sigma.on('clickStage', () => events.stageClicked());
   sigma.on('enterNode', () => (container.style.cursor = 'pointer'));
   sigma.on('leaveNode', () => (container.style.cursor = ''));
-  // sigma follows window resizes only; the map also changes size when the side panel opens.
-  const resizes = new ResizeObserver(() => sigma.refresh());
+  // sigma follows window resizes only; the map also changes size when the side panel opens. A
+  // new size needs a new frame, not a new index (the observer also reports the size it starts with).
+  let size = [container.clientWidth, container.clientHeight].join('×');
+  const resizes = new ResizeObserver(() => {
+    const next = [container.clientWidth, container.clientHeight].join('×');
+    if (next === size) return;
+    size = next;
+    sigma.scheduleRender();
+  });
   resizes.observe(container);
 
   let layout: FA2Layout | null = null;
@@ -57,6 +92,8 @@ export async function createSigmaAtlasRenderer(
 
   return {
     setView(next) {
+      // The screen hands the same view again when only the renderer changed: nothing to redraw.
+      if (next === view) return;
       view = next;
       // Colours and hidden flags change the drawn data: a full refresh (no graph rebuild).
       sigma.refresh();
@@ -78,7 +115,16 @@ export async function createSigmaAtlasRenderer(
         getEdgeWeight: 'weight',
       });
       layout = running;
-      const showEvery = graph.order + graph.size > 3_000 ? LARGE_SHOW_EVERY_MS : SMALL_SHOW_EVERY_MS;
+      const showEvery = largeMap ? LARGE_SHOW_EVERY_MS : SMALL_SHOW_EVERY_MS;
+      if (largeMap && !linksHidden) {
+        linksHidden = true;
+        sigma.refresh();
+      }
+      const copyPositions = () =>
+        graph.forEachNode((id, attributes) => {
+          attributes.x = working.getNodeAttribute(id, 'x');
+          attributes.y = working.getNodeAttribute(id, 'y');
+        });
       const show = () =>
         graph.updateEachNodeAttributes(
           (id, attributes) => {
@@ -97,14 +143,21 @@ export async function createSigmaAtlasRenderer(
           quietChecks = movement < SETTLED_MOVEMENT ? quietChecks + 1 : 0;
           if (quietChecks >= 2) finish();
         }, CHECK_EVERY_MS);
-        const showing = setInterval(show, showEvery);
+        // Steps are shown while frames are quick; one slow frame and only the result is shown.
+        const showing = setInterval(() => {
+          if (frames.lastMs > SLOW_FRAME_MS) clearInterval(showing);
+          else show();
+        }, showEvery);
         const deadline = setTimeout(() => finish(), maxMs);
         const finish = () => {
           clearInterval(check);
           clearInterval(showing);
           clearTimeout(deadline);
           running.kill();
-          show();
+          linksHidden = false;
+          // Positions and links change together: one full refresh draws both.
+          copyPositions();
+          sigma.refresh();
           if (layout === running) layout = null;
           finishLayout = null;
           resolve();
@@ -125,4 +178,29 @@ export async function createSigmaAtlasRenderer(
       sigma.kill();
     },
   };
+}
+/**
+ * The cost of the last frame: from the start of sigma's drawing until the second frame callback
+ * after it, by which time the browser has handed the picture to the screen whether sigma drew
+ * inside a frame callback or in a task of its own (with software WebGL the canvas is read back
+ * on the main thread in between, and that is most of the cost). At most one frame too long.
+ */
+class FrameCost {
+  lastMs = 0;
+  private started = 0;
+  private pending = 0;
+
+  beforeRender(): void {
+    this.started = performance.now();
+  }
+
+  afterRender(): void {
+    const started = this.started;
+    cancelAnimationFrame(this.pending);
+    this.pending = requestAnimationFrame(() => {
+      this.pending = requestAnimationFrame(() => {
+        this.lastMs = performance.now() - started;
+      });
+    });
+  }
 }
