@@ -44,5 +44,7 @@ async function authenticateToken(dataSource: DataSource, req: Request, header: s
   const user = token.createdById ? await dataSource.getRepository(User).findOneBy({ id: token.createdById }) : null;
   req.viewer = { user, workspace: token.workspace, role: 'architect', tokenId: token.id };
   // Not awaited: a lost "last used" stamp is not worth failing a push over.
-  void dataSource.getRepository(ApiToken).update(token.id, { lastUsedAt: new Date() }).catch(() => undefined);
+  // Awaited, so no write outlives its request (tokens are used by CI pushes, not page loads);
+  // a failure to note the time does not refuse the request.
+  await dataSource.getRepository(ApiToken).update(token.id, { lastUsedAt: new Date() }).catch(() => undefined);
 }

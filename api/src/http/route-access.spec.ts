@@ -57,6 +57,8 @@ const MATRIX: Record<string, Expected[]> = {
   'GET /api/snapshots/:id/functions':                [401,      200,   200,       200,      200,    403],
   'GET /api/snapshots/:id/functions/:functionId':    [401,      200,   200,       200,      200,    403],
   'GET /api/snapshots/:id/modules':                  [401,      200,   200,       200,      200,    403],
+  'GET /api/snapshots/:id/modules/:moduleId':        [401,      200,   200,       200,      200,    403],
+  'GET /api/snapshots/:id/clusters':                 [401,      200,   200,       200,      200,    403],
   'GET /api/snapshots/:id/module-graph':             [401,      200,   200,       200,      200,    403],
   'GET /api/snapshots/:id/gravity':                  [401,      200,   200,       200,      200,    403],
   'POST /api/snapshots/:id/coverage':                [401,      201,   201,       403,      403,    403],
@@ -125,6 +127,8 @@ const CALLS: Record<string, (f: Fixtures, t: TestApp) => Call | Promise<Call>> =
   'GET /api/snapshots/:id/functions': (f) => ({ url: `/api/snapshots/${f.snapshotId}/functions` }),
   'GET /api/snapshots/:id/functions/:functionId': (f) => ({ url: `/api/snapshots/${f.snapshotId}/functions/${f.functionId}` }),
   'GET /api/snapshots/:id/modules': (f) => ({ url: `/api/snapshots/${f.snapshotId}/modules` }),
+  'GET /api/snapshots/:id/modules/:moduleId': (f) => ({ url: `/api/snapshots/${f.snapshotId}/modules/${encodeURIComponent('file:src/orders/order.ts')}` }),
+  'GET /api/snapshots/:id/clusters': (f) => ({ url: `/api/snapshots/${f.snapshotId}/clusters?level=file` }),
   'GET /api/snapshots/:id/module-graph': (f) => ({ url: `/api/snapshots/${f.snapshotId}/module-graph` }),
   'GET /api/snapshots/:id/gravity': (f) => ({ url: `/api/snapshots/${f.snapshotId}/gravity` }),
   'POST /api/snapshots/:id/coverage': (f) => ({

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { z } from 'zod';
+import { NotFoundError } from '../errors';
 
 export const levelSchema = z.enum(['file', 'folder', 'package']);
 
@@ -24,14 +25,45 @@ export async function listModules(dataSource: DataSource, snapshotId: string, le
   return dataSource.query(`SELECT ${MODULE_COLUMNS} FROM module_metric WHERE snapshot_id = $1 AND level = $2 ORDER BY gravity_rank`, [snapshotId, level]);
 }
 
-/** The module map at one level in the shape the Atlas draws: nodes, weighted edges and clusters. */
+/** What the map draws and lists of each module; everything else comes with one module (`moduleDetail`). */
+const MAP_COLUMNS = `module_id AS id, path, name, functions, cyclomatic, decisions, cluster, gravity_rank AS "gravityRank"`;
+
+/** A link of the map: indexes of its two modules in `nodes`, and its weight (call sites plus imports). */
+export type MapLink = [from: number, to: number, weight: number];
+
+/**
+ * The module map at one level in the shape the Atlas draws: nodes with the figures the map and
+ * its list show, links as index pairs into `nodes` with their weight, and the clusters with
+ * their sizes. Lean on purpose: a 20,000-module map is sent and parsed whole, so each node
+ * carries eight fields (one module's full figures are `moduleDetail`) and a link three numbers
+ * rather than two module ids — about a third of the bytes of full records.
+ */
 export async function moduleGraph(dataSource: DataSource, snapshotId: string, level: string, minWeight: number) {
   const [nodes, edges, clusters] = await Promise.all([
-    dataSource.query(`SELECT ${MODULE_COLUMNS} FROM module_metric WHERE snapshot_id = $1 AND level = $2 ORDER BY module_id`, [snapshotId, level]),
-    dataSource.query(`SELECT from_module AS "from", to_module AS "to", weight, calls, imports FROM module_edge WHERE snapshot_id = $1 AND level = $2 AND weight >= $3 ORDER BY from_module, to_module`, [snapshotId, level, minWeight]),
-    dataSource.query(`SELECT cluster_id AS id, members, functions, cyclomatic, decisions, internal_weight AS "internalWeight", external_weight AS "externalWeight" FROM cluster WHERE snapshot_id = $1 AND level = $2 ORDER BY cyclomatic DESC, cluster_id`, [snapshotId, level]),
+    dataSource.query(`SELECT ${MAP_COLUMNS} FROM module_metric WHERE snapshot_id = $1 AND level = $2 ORDER BY module_id`, [snapshotId, level]) as Promise<{ id: string }[]>,
+    dataSource.query(`SELECT from_module AS "from", to_module AS "to", weight FROM module_edge WHERE snapshot_id = $1 AND level = $2 AND weight >= $3 ORDER BY from_module, to_module`, [snapshotId, level, minWeight]) as Promise<{ from: string; to: string; weight: number }[]>,
+    dataSource.query(`SELECT cluster_id AS id, jsonb_array_length(members) AS size, functions, cyclomatic, decisions, internal_weight AS "internalWeight", external_weight AS "externalWeight" FROM cluster WHERE snapshot_id = $1 AND level = $2 ORDER BY cyclomatic DESC, cluster_id`, [snapshotId, level]),
   ]);
-  return { level, nodes, edges, clusters };
+  const index = new Map(nodes.map((node, i) => [node.id, i]));
+  const links: MapLink[] = [];
+  for (const edge of edges) {
+    const from = index.get(edge.from);
+    const to = index.get(edge.to);
+    if (from !== undefined && to !== undefined) links.push([from, to, edge.weight]);
+  }
+  return { level, nodes, links, clusters };
+}
+
+/** One module with all its figures and gravity reasons; 404 when the snapshot has no such module. */
+export async function moduleDetail(dataSource: DataSource, snapshotId: string, moduleId: string) {
+  const [module] = await dataSource.query(`SELECT ${MODULE_COLUMNS} FROM module_metric WHERE snapshot_id = $1 AND module_id = $2`, [snapshotId, moduleId]);
+  if (!module) throw new NotFoundError('No such module in this snapshot.');
+  return module;
+}
+
+/** Each cluster of one level with its member module ids, largest ΣV first. */
+export async function listClusters(dataSource: DataSource, snapshotId: string, level: string) {
+  return dataSource.query(`SELECT cluster_id AS id, members, functions, cyclomatic, decisions, internal_weight AS "internalWeight", external_weight AS "externalWeight" FROM cluster WHERE snapshot_id = $1 AND level = $2 ORDER BY cyclomatic DESC, cluster_id`, [snapshotId, level]);
 }
 
 /**

@@ -66,7 +66,21 @@ describe('an analysis through the API', () => {
   it('should serve the module graph, gravity and a carve plan from the clusters', async () => {
     const graph = await request(t.app).get(`/api/snapshots/${snapshotId}/module-graph?level=folder`).set(viewer.headers).expect(200);
     expect(graph.body.nodes.map((n: { id: string }) => n.id)).toEqual(['folder:src/orders', 'folder:src/pricing']);
-    expect(graph.body.edges.length).toBeGreaterThan(0);
+    expect(graph.body.links.length).toBeGreaterThan(0);
+    // Links are index pairs into nodes; the lean nodes leave the full figures to the module route.
+    const [from, to, weight] = graph.body.links[0];
+    expect([graph.body.nodes[from].id, graph.body.nodes[to].id].sort()).toEqual(['folder:src/orders', 'folder:src/pricing']);
+    expect(weight).toBeGreaterThan(0);
+    expect(graph.body.nodes[0].reasons).toBeUndefined();
+    expect(graph.body.clusters[0].size).toBeGreaterThan(0);
+    const one = await request(t.app).get(`/api/snapshots/${snapshotId}/modules/${encodeURIComponent('folder:src/orders')}`).set(viewer.headers).expect(200);
+    expect(one.body.module).toMatchObject({ id: 'folder:src/orders', level: 'folder', gravityRank: 1 });
+    expect(one.body.module.reasons.length).toBeGreaterThan(0);
+    await request(t.app).get(`/api/snapshots/${snapshotId}/modules/${encodeURIComponent('folder:src/nowhere')}`).set(viewer.headers).expect(404);
+    const bad = await request(t.app).get(`/api/snapshots/${snapshotId}/modules/orders`).set(viewer.headers).expect(400);
+    expect(bad.body.error.message).toMatch(/module id/);
+    const clusters = await request(t.app).get(`/api/snapshots/${snapshotId}/clusters?level=file`).set(viewer.headers).expect(200);
+    expect(clusters.body.items.flatMap((c: { members: string[] }) => c.members).sort()).toEqual(['file:src/orders/order.ts', 'file:src/pricing/price.ts']);
     // Sent gzipped to clients that accept it (supertest asks and inflates), plain to others.
     expect(graph.headers['content-encoding']).toBe('gzip');
     expect(graph.headers['vary']).toMatch(/Accept-Encoding/i);

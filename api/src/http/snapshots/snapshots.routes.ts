@@ -5,7 +5,9 @@ import { z } from 'zod';
 import { Snapshot } from '../../db/entities';
 import { audit } from '../../services/audit';
 import { FunctionCounts, functionDetail, functionQuerySchema, listFunctions } from '../../services/function-queries';
-import { gravityQuerySchema, gravityRanking, levelSchema, listModules, moduleGraph, moduleGraphQuerySchema } from '../../services/module-queries';
+import {
+  gravityQuerySchema, gravityRanking, levelSchema, listClusters, listModules, moduleDetail, moduleGraph, moduleGraphQuerySchema,
+} from '../../services/module-queries';
 import { readySnapshot, requireModuleMap, snapshotInWorkspace } from '../../services/snapshot-access';
 import type { SnapshotCache } from '../../services/snapshot-cache';
 import { exportSnapshot, importCoverageReport } from '../../services/snapshot-files';
@@ -19,6 +21,7 @@ import { streamSnapshotEvents } from './snapshot-events';
 
 const idParams = z.object({ id: z.uuid('must be a snapshot id') });
 const functionParams = idParams.extend({ functionId: z.string().min(1).max(200) });
+const moduleParams = idParams.extend({ moduleId: z.string().regex(/^(file|folder|package):/, 'must be a module id such as folder:src/orders').max(1000) });
 const levelQuery = z.object({ level: levelSchema.default('folder') }).strict();
 const exportQuery = z.object({ format: z.enum(['json', 'sarif', 'csv', 'graphml']), level: levelSchema.default('folder') }).strict();
 const coverageQuery = z.object({ fileName: z.string().max(255).default('coverage') }).strict();
@@ -71,6 +74,18 @@ export function snapshotRoutes(dataSource: DataSource, cache: SnapshotCache): Ro
     requireModuleMap(s);
     const { level } = validate(levelQuery, req.query, 'query');
     res.json({ level, items: await listModules(dataSource, s.id, level) });
+  });
+  router.get('/:id/modules/:moduleId', allow('snapshot.read'), async (req, res) => {
+    const { id, moduleId } = validate(moduleParams, req.params, 'params');
+    const s = await readySnapshot(dataSource, viewerOf(req).workspace.id, id);
+    requireModuleMap(s);
+    res.json({ module: await moduleDetail(dataSource, s.id, moduleId) });
+  });
+  router.get('/:id/clusters', allow('snapshot.read'), async (req, res) => {
+    const s = await ready(req);
+    requireModuleMap(s);
+    const { level } = validate(levelQuery, req.query, 'query');
+    res.json({ level, items: await listClusters(dataSource, s.id, level) });
   });
   router.get('/:id/module-graph', allow('snapshot.read'), async (req, res) => {
     const s = await ready(req);

@@ -39,7 +39,7 @@ describe('atlas graph', () => {
 
   it('should sum repeated links between the same modules in the same direction', () => {
     const data = demoModuleGraph();
-    data.edges.push({ from: 'folder:src/routing', to: 'folder:src/dispatch-core', weight: 5, calls: 5, imports: 0 });
+    data.links.push([0, 1, 5]);
     const model = buildAtlasModel(data);
 
     const edge = model.graph.edge('folder:src/routing', 'folder:src/dispatch-core');

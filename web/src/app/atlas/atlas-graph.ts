@@ -1,7 +1,7 @@
 import Graph from 'graphology';
 
 import { clusterColours, type ClusterSwatch } from './cluster-palette';
-import { moduleLabel, type ModuleGraph, type ModuleRecord } from './module-graph';
+import { moduleLabel, type ModuleGraph, type ModuleNode } from './module-graph';
 
 /** What the map keeps on each module node (sigma reads x, y, size, color, label). */
 export interface AtlasNodeAttributes {
@@ -29,9 +29,9 @@ export type AtlasGraph = Graph<AtlasNodeAttributes, AtlasEdgeAttributes>;
 export interface AtlasModel {
   graph: AtlasGraph;
   /** Modules by id. */
-  byId: ReadonlyMap<string, ModuleRecord>;
+  byId: ReadonlyMap<string, ModuleNode>;
   /** Modules, largest ΣV first (the order of the module list). */
-  modules: readonly ModuleRecord[];
+  modules: readonly ModuleNode[];
   swatches: readonly ClusterSwatch[];
   maxCyclomatic: number;
   maxWeight: number;
@@ -68,10 +68,10 @@ export function edgeSize(weight: number, maxWeight: number): number {
 }
 
 /**
- * Builds the map's graph in one pass over the nodes and one over the links. Links to modules
- * that are not in the answer and links of a module to itself are left out; repeated links
- * between the same two modules in the same direction are summed. Every node starts at (0, 0):
- * place them with `seedPositions` or saved positions.
+ * Builds the map's graph in one pass over the nodes and one over the links. Links whose index
+ * points at no node and links of a module to itself are left out; repeated links between the
+ * same two modules in the same direction are summed. Every node starts at (0, 0): place them
+ * with `seedPositions` or saved positions.
  */
 export function buildAtlasModel(data: ModuleGraph): AtlasModel {
   const colours = clusterColours(data);
@@ -80,7 +80,7 @@ export function buildAtlasModel(data: ModuleGraph): AtlasModel {
     multi: false,
     allowSelfLoops: false,
   });
-  const byId = new Map<string, ModuleRecord>();
+  const byId = new Map<string, ModuleNode>();
   let maxCyclomatic = 0;
   for (const node of data.nodes) {
     if (node.cyclomatic > maxCyclomatic) maxCyclomatic = node.cyclomatic;
@@ -98,13 +98,15 @@ export function buildAtlasModel(data: ModuleGraph): AtlasModel {
       cluster: node.cluster,
     });
   }
-  for (const edge of data.edges) {
-    if (edge.from === edge.to || !byId.has(edge.from) || !byId.has(edge.to)) continue;
-    const existing = graph.edge(edge.from, edge.to);
+  for (const [fromIndex, toIndex, weight] of data.links) {
+    const from = data.nodes[fromIndex]?.id;
+    const to = data.nodes[toIndex]?.id;
+    if (from === undefined || to === undefined || from === to) continue;
+    const existing = graph.edge(from, to);
     if (existing === undefined) {
-      graph.addDirectedEdge(edge.from, edge.to, { weight: edge.weight, size: 0, color: EDGE_COLOUR });
+      graph.addDirectedEdge(from, to, { weight, size: 0, color: EDGE_COLOUR });
     } else {
-      graph.updateEdgeAttribute(existing, 'weight', (w) => (w ?? 0) + edge.weight);
+      graph.updateEdgeAttribute(existing, 'weight', (w) => (w ?? 0) + weight);
     }
   }
   let maxWeight = 0;

@@ -10,7 +10,7 @@ import type { AtlasGraph } from './atlas-graph';
 import { ATLAS_RENDERER, type AtlasRenderer, type AtlasRendererEvents } from './atlas-renderer';
 import type { AtlasView } from './atlas-view';
 import type { ModuleGraph } from './module-graph';
-import { demoModuleGraph } from './module-graph.fixtures';
+import { demoModuleGraph, demoModuleRecords } from './module-graph.fixtures';
 import { MemoryPositionStore, POSITION_STORE, positionKey } from './position-cache';
 
 /** Stands in for sigma (jsdom has no WebGL): records what the screen asks of the map. */
@@ -118,6 +118,13 @@ describe('Atlas', () => {
     }
   }
 
+  /** Answers the side panel's request for one module's full figures. */
+  async function answerModule(id: string): Promise<void> {
+    const module = demoModuleRecords().find((m) => m.id === id);
+    http.expectOne({ method: 'GET', url: `/api/snapshots/s-1/modules/${encodeURIComponent(id)}` }).flush({ module });
+    await settle();
+  }
+
   function listRows(): string[] {
     return Array.from(page().querySelectorAll('[role="option"] .name')).map((el) => el.textContent?.trim() ?? '');
   }
@@ -175,10 +182,15 @@ describe('Atlas', () => {
     expect([...renderer.lastView().neighbours].sort()).toEqual(['folder:src/billing', 'folder:src/routing']);
     const panel = page().querySelector('sl-module-details');
     expect(panel?.querySelector('h2')?.textContent?.trim()).toBe('src/dispatch-core');
-    const figures = Array.from(panel?.querySelectorAll('.figures > div') ?? []).map((d) =>
-      [d.querySelector('dt'), d.querySelector('dd')].map((part) => part?.textContent?.replace(/\s+/g, ' ').trim()).join(': '),
-    );
-    expect(figures).toEqual([
+    const figures = () =>
+      Array.from(panel?.querySelectorAll('.figures > div') ?? []).map((d) =>
+        [d.querySelector('dt'), d.querySelector('dd')].map((part) => part?.textContent?.replace(/\s+/g, ' ').trim()).join(': '),
+      );
+    // What the map knows shows at once; the rest once the module's own figures arrive.
+    expect(figures()).toEqual(['P: 99', 'ΣV: 400', 'Σ decisions: 204', 'Gravity rank: #1']);
+    expect(panel?.querySelector('[role="status"]')?.textContent).toContain('Loading');
+    await answerModule('folder:src/dispatch-core');
+    expect(figures()).toEqual([
       'P: 99',
       'ΣV: 400',
       'Σ decisions: 204',
@@ -195,11 +207,24 @@ describe('Atlas', () => {
     expect(page().querySelector('[role="option"][aria-selected="true"] .name')?.textContent?.trim()).toBe('src/dispatch-core');
   });
 
+  it('should say so in the panel when the module figures cannot be loaded, keeping what the map knows', async () => {
+    await open('/snapshots/s-1/atlas?focus=folder:src/billing');
+    http
+      .expectOne(`/api/snapshots/s-1/modules/${encodeURIComponent('folder:src/billing')}`)
+      .flush(errorBody('not_found', 'No such module in this snapshot.'), { status: 404, statusText: 'Not Found' });
+    await settle();
+
+    const panel = page().querySelector('sl-module-details');
+    expect(panel?.querySelector('[role="alert"]')?.textContent).toContain('No such module in this snapshot.');
+    expect(panel?.querySelector('.figures')?.textContent).toContain('ΣV');
+  });
+
   it('should select a module clicked on the map and clear the selection on empty space', async () => {
     await open('/snapshots/s-1/atlas');
 
     renderers[0].events.nodeClicked('folder:src/billing');
     await settle();
+    await answerModule('folder:src/billing');
     expect(TestBed.inject(Router).url).toBe('/snapshots/s-1/atlas?focus=folder:src%2Fbilling');
     expect(page().querySelector('sl-module-details h2')?.textContent?.trim()).toBe('src/billing');
     expect(renderers[0].lastView().selected).toBe('folder:src/billing');
@@ -224,6 +249,7 @@ describe('Atlas', () => {
     expect(option?.textContent).toContain('src/routing');
     option!.click();
     await settle();
+    await answerModule('folder:src/routing');
 
     expect(renderers[0].focused).toContain('folder:src/routing');
     expect(renderers[0].lastView().selected).toBe('folder:src/routing');
@@ -247,6 +273,7 @@ describe('Atlas', () => {
 
   it('should switch the level through the URL, drop the selection and draw the new map', async () => {
     await open('/snapshots/s-1/atlas?focus=folder:src/billing');
+    await answerModule('folder:src/billing');
     const toggles = Array.from(page().querySelectorAll<HTMLButtonElement>('mat-button-toggle button'));
     expect(toggles.map((b) => b.textContent?.trim())).toEqual(['file', 'folder', 'package']);
     toggles[0].click();
@@ -259,7 +286,7 @@ describe('Atlas', () => {
   });
 
   it('should say when a level has no modules', async () => {
-    await open('/snapshots/s-1/atlas?level=package', { level: 'package', nodes: [], edges: [], clusters: [] }, 'package');
+    await open('/snapshots/s-1/atlas?level=package', { level: 'package', nodes: [], links: [], clusters: [] }, 'package');
 
     expect(page().querySelector('[role="status"]')?.textContent).toContain('no modules at the package level');
     expect(renderers).toHaveLength(0);

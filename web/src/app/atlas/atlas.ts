@@ -27,10 +27,10 @@ import { buildAtlasModel, heaviestLinks, neighbourhood, seedPositions, type Atla
 import { ATLAS_RENDERER, layoutBudgetMs, type AtlasRenderer } from './atlas-renderer';
 import { afterNextPaint, markAtlas } from './atlas-timing';
 import type { AtlasView } from './atlas-view';
-import { moduleLabel, MODULE_LEVELS, parseLevel, type ModuleLevel, type ModuleRecord } from './module-graph';
+import { moduleLabel, MODULE_LEVELS, parseLevel, type ModuleLevel, type ModuleNode } from './module-graph';
 import { ModuleGraphApi } from './module-graph-api';
 import { matchModules, suggestModules } from './module-search';
-import { ModuleDetails } from './module-details';
+import { ModuleDetails, type ModuleDetailsState } from './module-details';
 import { ModuleList } from './module-list';
 import { applyPositions, capturePositions, POSITION_STORE, positionKey } from './position-cache';
 
@@ -110,11 +110,13 @@ export class Atlas {
   protected readonly notice = signal<string | null>(null);
 
   /** The selected module, when it exists at this level. */
-  protected readonly selected = computed<ModuleRecord | null>(() => {
+  protected readonly selected = computed<ModuleNode | null>(() => {
     const id = this.focus();
     return (id && this.model()?.byId.get(id)) || null;
   });
   protected readonly selectedId = computed(() => this.selected()?.id ?? null);
+  /** All figures of the selected module, fetched when it is selected (the map carries a few). */
+  protected readonly selectedDetails = signal<ModuleDetailsState>({ kind: 'loading' });
   /** The modules in the list: search and ΣV filter applied. */
   protected readonly listed = computed(() =>
     matchModules(this.model()?.modules ?? [], this.query(), this.minCyclomatic(), this.selectedId()),
@@ -176,6 +178,22 @@ export class Atlas {
         takeUntilDestroyed(),
       )
       .subscribe((state) => this.state.set(state));
+
+    const selection = computed(() => ({ snapshotId: this.snapshotId(), moduleId: this.selectedId() }));
+    toObservable(selection)
+      .pipe(
+        switchMap(({ snapshotId, moduleId }) =>
+          moduleId === null
+            ? of<ModuleDetailsState>({ kind: 'loading' })
+            : this.api.module(snapshotId, moduleId).pipe(
+                map((module): ModuleDetailsState => ({ kind: 'loaded', module })),
+                catchError((error: unknown) => of<ModuleDetailsState>({ kind: 'failed', message: apiErrorMessage(error) })),
+                startWith<ModuleDetailsState>({ kind: 'loading' }),
+              ),
+        ),
+        takeUntilDestroyed(),
+      )
+      .subscribe((state) => this.selectedDetails.set(state));
 
     // Draws the map once its model and its container exist; a new level or snapshot redraws.
     effect((onCleanup) => {

@@ -53,7 +53,7 @@ export function clusterColours(graph: Pick<ModuleGraph, 'nodes' | 'clusters'>): 
       id: cluster.id,
       label: `Cluster ${cluster.id}`,
       colour,
-      members: cluster.members.length,
+      members: cluster.size,
       cyclomatic: cluster.cyclomatic,
     });
   }

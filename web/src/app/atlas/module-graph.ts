@@ -1,4 +1,4 @@
-/** Shapes of `GET /api/snapshots/:id/module-graph` (docs/openapi.yaml: ModuleGraph, Module). */
+/** Shapes of `GET /api/snapshots/:id/module-graph` and `…/modules/:moduleId` (docs/openapi.yaml: ModuleGraph, Module). */
 
 /** The three module levels of the map. */
 export type ModuleLevel = 'file' | 'folder' | 'package';
@@ -9,10 +9,9 @@ export const MODULE_LEVELS: readonly ModuleLevel[] = ['file', 'folder', 'package
 /** The level the map opens on when the URL names none (the API's default too). */
 export const DEFAULT_LEVEL: ModuleLevel = 'folder';
 
-/** One module's figures. */
-export interface ModuleRecord {
+/** What the map draws and lists of one module (a node of `GET …/module-graph`). */
+export interface ModuleNode {
   id: string;
-  level?: ModuleLevel;
   path: string;
   name: string | null;
   /** P: functions (connected components). */
@@ -21,6 +20,13 @@ export interface ModuleRecord {
   cyclomatic: number;
   /** Σπ. */
   decisions: number;
+  cluster: string | null;
+  gravityRank: number;
+}
+
+/** One module with all its figures (`GET /api/snapshots/:id/modules/:moduleId`). */
+export interface ModuleRecord extends ModuleNode {
+  level?: ModuleLevel;
   /** The largest V(G) of one function in the module. */
   maxCyclomatic: number;
   overLimit?: number;
@@ -37,25 +43,18 @@ export interface ModuleRecord {
   integrationComplexity: number;
   unresolvedCalls?: number;
   externalCalls?: number;
-  cluster: string | null;
   gravity: number;
-  gravityRank: number;
   reasons: string[];
 }
 
-/** A weighted link between two modules: call sites plus imports. */
-export interface ModuleEdge {
-  from: string;
-  to: string;
-  weight: number;
-  calls: number;
-  imports: number;
-}
+/** A weighted link between two modules: indexes into the answer's nodes, and call sites plus imports. */
+export type MapLink = readonly [from: number, to: number, weight: number];
 
 /** One Louvain cluster with its sums. */
 export interface ModuleCluster {
   id: string;
-  members: string[];
+  /** Member modules. */
+  size: number;
   functions: number;
   cyclomatic: number;
   decisions: number;
@@ -66,8 +65,8 @@ export interface ModuleCluster {
 /** `GET /api/snapshots/:id/module-graph` → 200. */
 export interface ModuleGraph {
   level: ModuleLevel;
-  nodes: ModuleRecord[];
-  edges: ModuleEdge[];
+  nodes: ModuleNode[];
+  links: MapLink[];
   clusters: ModuleCluster[];
 }
 
@@ -77,6 +76,6 @@ export function parseLevel(value: string | null | undefined): ModuleLevel {
 }
 
 /** How a module is named on the map and in lists. */
-export function moduleLabel(module: Pick<ModuleRecord, 'name' | 'path'>): string {
+export function moduleLabel(module: Pick<ModuleNode, 'name' | 'path'>): string {
   return module.name || module.path;
 }

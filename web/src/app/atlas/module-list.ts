@@ -2,7 +2,7 @@ import { ScrollingModule, CdkVirtualScrollViewport } from '@angular/cdk/scrollin
 import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, effect, input, output, signal, untracked, viewChild } from '@angular/core';
 
-import { moduleLabel, type ModuleRecord } from './module-graph';
+import { moduleLabel, type ModuleNode } from './module-graph';
 
 /** Height of one row in pixels (the virtual scroll needs a fixed size). */
 export const ROW_HEIGHT = 44;
@@ -21,7 +21,7 @@ export const ROW_HEIGHT = 44;
 })
 export class ModuleList {
   /** The modules to list, in order. */
-  readonly modules = input.required<readonly ModuleRecord[]>();
+  readonly modules = input.required<readonly ModuleNode[]>();
   /** The selected module's id, or null. */
   readonly selectedId = input<string | null>(null);
   /** The colour of a module's dot (its cluster's). */
@@ -35,7 +35,7 @@ export class ModuleList {
   protected readonly activeIndex = signal(0);
   protected readonly rowHeight = ROW_HEIGHT;
   protected readonly labelOf = moduleLabel;
-  protected readonly trackById = (_index: number, module: ModuleRecord): string => module.id;
+  protected readonly trackById = (_index: number, module: ModuleNode): string => module.id;
   private readonly viewport = viewChild(CdkVirtualScrollViewport);
 
   constructor() {

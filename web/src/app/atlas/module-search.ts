@@ -1,15 +1,15 @@
-import { moduleLabel, type ModuleRecord } from './module-graph';
+import { moduleLabel, type ModuleNode } from './module-graph';
 
 /**
  * The modules a search and the ΣV filter leave, in the given order: the query matches any part
  * of the path or name, ignoring case; the selected module is always kept (it stays on the map).
  */
 export function matchModules(
-  modules: readonly ModuleRecord[],
+  modules: readonly ModuleNode[],
   query: string,
   minCyclomatic: number,
   selected: string | null = null,
-): readonly ModuleRecord[] {
+): readonly ModuleNode[] {
   const needle = query.trim().toLowerCase();
   if (needle === '' && minCyclomatic <= 0) return modules;
   return modules.filter(
@@ -20,11 +20,11 @@ export function matchModules(
 }
 
 /** At most `limit` suggestions for the search field: modules whose name starts with the query first. */
-export function suggestModules(matches: readonly ModuleRecord[], query: string, limit: number): ModuleRecord[] {
+export function suggestModules(matches: readonly ModuleNode[], query: string, limit: number): ModuleNode[] {
   const needle = query.trim().toLowerCase();
   if (needle === '') return [];
-  const starts: ModuleRecord[] = [];
-  const rest: ModuleRecord[] = [];
+  const starts: ModuleNode[] = [];
+  const rest: ModuleNode[] = [];
   for (const m of matches) {
     const tail = moduleLabel(m).toLowerCase().split('/').pop() ?? '';
     (tail.startsWith(needle) ? starts : rest).push(m);

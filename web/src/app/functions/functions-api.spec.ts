@@ -71,16 +71,14 @@ describe('FunctionsApi', () => {
     ]);
   });
 
-  it('should read the file-level clusters from the module graph', () => {
+  it('should read the file-level clusters', () => {
     let clusters: ClusterSummary[] = [];
     api.clusters('s-1').subscribe((list) => (clusters = list));
-    const req = http.expectOne((r) => r.url === '/api/snapshots/s-1/module-graph');
+    const req = http.expectOne((r) => r.url === '/api/snapshots/s-1/clusters');
     expect(req.request.params.get('level')).toBe('file');
     req.flush({
       level: 'file',
-      nodes: [],
-      edges: [],
-      clusters: [{ id: 'c1', members: ['file:src/a.ts'], functions: 3, cyclomatic: 7, decisions: 4, internalWeight: 1, externalWeight: 0 }],
+      items: [{ id: 'c1', members: ['file:src/a.ts'], functions: 3, cyclomatic: 7, decisions: 4, internalWeight: 1, externalWeight: 0 }],
     });
     expect(clusters).toEqual([{ id: 'c1', members: ['file:src/a.ts'], functions: 3, cyclomatic: 7 }]);
   });

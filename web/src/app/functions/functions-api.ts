@@ -8,7 +8,7 @@ import type {
   ClusterSummary,
   FunctionPage,
   FunctionQuery,
-  ModuleGraphClusters,
+  ClusterListResponse,
   ModuleLevel,
   ModuleListResponse,
   ModuleOption,
@@ -52,8 +52,8 @@ export class FunctionsApi {
   /** The snapshot's file-level clusters, the ids function rows carry. */
   clusters(snapshotId: string): Observable<ClusterSummary[]> {
     return this.http
-      .get<ModuleGraphClusters>(`${base(snapshotId)}/module-graph`, { params: { level: 'file' } })
-      .pipe(map((body) => body.clusters.map(({ id, members, functions, cyclomatic }) => ({ id, members, functions, cyclomatic }))));
+      .get<ClusterListResponse>(`${base(snapshotId)}/clusters`, { params: { level: 'file' } })
+      .pipe(map((body) => body.items.map(({ id, members, functions, cyclomatic }) => ({ id, members, functions, cyclomatic }))));
   }
 }
 

@@ -1,4 +1,4 @@
-/** Shapes of the Functions screen's API answers (see docs/openapi.yaml: FunctionPage, ModuleGraph). */
+/** Shapes of the Functions screen's API answers (see docs/openapi.yaml: FunctionPage, Cluster). */
 
 /** The V(G) bands, in order: calm 1–10, busy 11–20, tangled 21–50, knotted > 50. */
 export const SEVERITY_BANDS = ['calm', 'busy', 'tangled', 'knotted'] as const;
@@ -116,7 +116,7 @@ export interface ModuleListResponse {
   items: ModuleOption[];
 }
 
-/** One Louvain cluster of files (`GET /api/snapshots/:id/module-graph?level=file`). */
+/** One Louvain cluster of files (`GET /api/snapshots/:id/clusters?level=file`). */
 export interface ClusterSummary {
   id: string;
   /** Module ids of its files, e.g. `file:src/orders/order.ts`. */
@@ -125,9 +125,9 @@ export interface ClusterSummary {
   cyclomatic: number;
 }
 
-/** The part of `GET /api/snapshots/:id/module-graph` the filter needs. */
-export interface ModuleGraphClusters {
-  clusters: ClusterSummary[];
+/** `GET /api/snapshots/:id/clusters?level=file` → 200 (the part the filter needs). */
+export interface ClusterListResponse {
+  items: ClusterSummary[];
 }
 
 /** The coverage report imported into a snapshot, as the snapshot summary carries it. */

@@ -82,11 +82,9 @@ describe('Functions', () => {
               : [],
         });
     }
-    http.expectOne((r) => r.url === '/api/snapshots/s-1/module-graph').flush({
+    http.expectOne((r) => r.url === '/api/snapshots/s-1/clusters').flush({
       level: 'file',
-      nodes: [],
-      edges: [],
-      clusters: [{ id: 'c1', members: ['file:src/dispatch-core/planDispatch.ts'], functions: 155, cyclomatic: 409 }],
+      items: [{ id: 'c1', members: ['file:src/dispatch-core/planDispatch.ts'], functions: 155, cyclomatic: 409 }],
     });
     await harness.fixture.whenStable();
   }
@@ -327,7 +325,7 @@ describe('Functions', () => {
     await open();
     http.expectOne('/api/snapshots/s-1').flush({ snapshot: snapshot({ id: 's-1' }) });
     const noMap = errorBody('no_module_map', 'This snapshot was made without the call graph.');
-    for (const req of http.match((r) => r.url.endsWith('/modules') || r.url.endsWith('/module-graph'))) {
+    for (const req of http.match((r) => r.url.endsWith('/modules') || r.url.endsWith('/clusters'))) {
       if (!req.cancelled) req.flush(noMap, { status: 409, statusText: 'Conflict' });
     }
     await answerPage(functionPage([plan]));
