@@ -23,6 +23,9 @@ const LARGE_SHOW_EVERY_MS = 1_200;
  */
 export const LARGE_MAP = 3_000;
 
+/** The layout is not taken as settled before this many rounds, however little the nodes move. */
+export const MIN_LAYOUT_ROUNDS = 60;
+
 /**
  * A frame that took longer than this (drawing plus handing the picture to the screen) means
  * this browser draws the map slowly — software WebGL, a weak graphics chip: the layout's steps
@@ -137,10 +140,14 @@ export async function createSigmaAtlasRenderer(
       return new Promise<void>((resolve) => {
         let previous = nodePositions(working);
         let quietChecks = 0;
+        // Each answer of the worker is one round of the layout. On a large map a round takes
+        // long enough that two checks may see little movement only because few rounds ran.
+        let rounds = 0;
+        working.on('eachNodeAttributesUpdated', () => void rounds++);
         const check = setInterval(() => {
           const movement = layoutMovement(previous, working);
           previous = nodePositions(working);
-          quietChecks = movement < SETTLED_MOVEMENT ? quietChecks + 1 : 0;
+          quietChecks = movement < SETTLED_MOVEMENT && rounds >= MIN_LAYOUT_ROUNDS ? quietChecks + 1 : 0;
           if (quietChecks >= 2) finish();
         }, CHECK_EVERY_MS);
         // Steps are shown while frames are quick; one slow frame and only the result is shown.
