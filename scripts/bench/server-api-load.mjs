@@ -100,7 +100,7 @@ await runPart('api-load', async (stack) => {
   await dataSource.query('ANALYZE');
 
   const { base, child: api } = await stack.startApi(url);
-  stack.startWorker(url, 0);
+  const worker = stack.startWorker(url, 0);
   // As a browser asks: the module graph is then sent gzipped (autocannon counts, never inflates).
   const headers = { Cookie: session.headers.Cookie, 'Accept-Encoding': 'gzip, deflate, br' };
   const functionsPaths = functionPaths(row.id, bands);
@@ -123,10 +123,15 @@ await runPart('api-load', async (stack) => {
   const load = async (name, paths) => {
     progress(`${name}: ${CONNECTIONS} connections for ${LOAD_SECONDS} s…`);
     const machineBefore = machineCpu();
-    const apiBefore = processCpuMs(api.pid);
+    const before = { api: processCpuMs(api.pid), worker: processCpuMs(worker.pid), postgres: stack.postgresCpuMs(), load: process.cpuUsage() };
     runs[name] = await loadPaths({ base, headers, paths, seconds: LOAD_SECONDS, connections: CONNECTIONS });
     const machineAfter = machineCpu();
-    runs[name].apiCpuShare = (processCpuMs(api.pid) - apiBefore) / (machineAfter.totalMs - machineBefore.totalMs);
+    const total = machineAfter.totalMs - machineBefore.totalMs;
+    const load = process.cpuUsage(before.load);
+    runs[name].apiCpuShare = (processCpuMs(api.pid) - before.api) / total;
+    runs[name].postgresCpuShare = (stack.postgresCpuMs() - before.postgres) / total;
+    runs[name].workerCpuShare = (processCpuMs(worker.pid) - before.worker) / total;
+    runs[name].loadCpuShare = (load.user + load.system) / 1000 / total;
     runs[name].machineBusy = (machineAfter.busyMs - machineBefore.busyMs) / (machineAfter.totalMs - machineBefore.totalMs);
     if (!stack.allAlive()) throw new Error(`a server process died during ${name} (logs in ${stack.dataDir}/logs)`);
   };
@@ -152,12 +157,12 @@ await runPart('api-load', async (stack) => {
   const target = (name) => (name.startsWith('functions') ? TARGETS.functions : TARGETS.moduleGraph);
   const lines = [
     `Reads under load: ${CONNECTIONS} connections for ${LOAD_SECONDS} s per row, loopback; a stored snapshot of ${f(shape.functions)} functions and ${f(shape.folders)} folder modules (${f(shape.folderEdges)} folder edges; the module graph answer is ${f(figures.graphKb)} kB of JSON, ${f(runs['module graph, idle'].meanKb)} kB as sent, gzipped, with its headers):`,
-    '| endpoint, server state | requests | requests/s | p50 (ms) | p95 (ms) | p99 (ms) | max (ms) | errors | p95 target | met | machine busy | of it the API |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: |',
-    ...Object.entries(runs).map(([name, r]) => `| ${name} | ${f(r.requests)} | ${r.perSecond.toFixed(1)} | ${f(r.p50)} | ${f(r.p95)} | ${f(r.p99)} | ${f(r.max)} | ${r.errors} | < ${target(name)} ms | ${r.p95 < target(name) ? 'yes' : 'no'} | ${pct(r.machineBusy)} | ${pct(r.apiCpuShare)} |`),
+    '| endpoint, server state | requests | requests/s | p50 (ms) | p95 (ms) | p99 (ms) | max (ms) | errors | p95 target | met | machine busy | API | PostgreSQL | load generator | worker |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: | ---: | ---: | ---: |',
+    ...Object.entries(runs).map(([name, r]) => `| ${name} | ${f(r.requests)} | ${r.perSecond.toFixed(1)} | ${f(r.p50)} | ${f(r.p95)} | ${f(r.p99)} | ${f(r.max)} | ${r.errors} | < ${target(name)} ms | ${r.p95 < target(name) ? 'yes' : 'no'} | ${pct(r.machineBusy)} | ${pct(r.apiCpuShare)} | ${pct(r.postgresCpuShare)} | ${pct(r.loadCpuShare)} | ${pct(r.workerCpuShare)} |`),
     '',
     `demo analysis (otterbay before, ${f(figures.analyses.underLoadMs.length)} run under load): ${(quiet.runMs / 1000).toFixed(1)} s alone, ${figures.analyses.underLoadMs.map((ms) => (ms / 1000).toFixed(1)).join(' s, ')} s under the readers`,
-    `machine busy: share of both cores' time used by any process during the row; "of it the API": the API process's share (autocannon, the worker, PostgreSQL and other work on the machine are the rest). 1-minute load average ${loadBefore.toFixed(1)} before the load runs, ${figures.loadAverage.after.toFixed(1)} after`,
+    `machine busy: share of both cores' time used by any process during the row; API, PostgreSQL (the cluster's processes, ended ones included), load generator (autocannon, in this process) and worker: each one's share of both cores' time (other work on the machine is the rest). 1-minute load average ${loadBefore.toFixed(1)} before the load runs, ${figures.loadAverage.after.toFixed(1)} after`,
   ];
   return { figures, text: lines.join('\n') };
 });

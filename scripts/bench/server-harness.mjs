@@ -141,6 +141,26 @@ export class BenchStack {
     })));
   }
 
+  /**
+   * CPU time (user + system, ms) of the cluster so far: the postmaster's own and that of the
+   * children it has reaped (backends and parallel workers that ended), plus its live children's.
+   */
+  postgresCpuMs() {
+    const postmaster = Number(fs.readFileSync(path.join(this.#postgres.clusterDir, 'postmaster.pid'), 'utf8').split('\n')[0]);
+    const [own, reaped] = processAndChildrenCpuMs(postmaster);
+    let total = own + reaped;
+    for (const entry of fs.readdirSync('/proc')) {
+      if (!/^\d+$/.test(entry)) continue;
+      try {
+        const stat = fs.readFileSync(`/proc/${entry}/stat`, 'utf8');
+        if (Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[1]) === postmaster) total += processCpuMs(Number(entry));
+      } catch {
+        // The process ended between listing and reading: its time is in the postmaster's reaped total.
+      }
+    }
+    return total;
+  }
+
   /** Whether every process started so far is still running. */
   allAlive() {
     return this.#group.allAlive();
@@ -256,6 +276,13 @@ export function machineCpu() {
   const idle = fields[3] + fields[4];
   const total = fields.reduce((a, b) => a + b, 0);
   return { busyMs: (total - idle) * tick, totalMs: total * tick };
+}
+
+/** A process's own CPU time and that of its children it has waited for (ms). */
+function processAndChildrenCpuMs(pid) {
+  const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+  const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+  return [(Number(fields[11]) + Number(fields[12])) * 10, (Number(fields[13]) + Number(fields[14])) * 10];
 }
 
 /** CPU time (user + system, ms) a running process has used, its threads included. */
