@@ -1,10 +1,9 @@
-import { DOCUMENT, DecimalPipe, PercentPipe } from '@angular/common';
+import { DecimalPipe, PercentPipe } from '@angular/common';
 import { HttpErrorResponse } from '@angular/common/http';
 import {
   ChangeDetectionStrategy,
   Component,
   computed,
-  DestroyRef,
   inject,
   linkedSignal,
   signal,
@@ -33,18 +32,16 @@ import {
   of,
   startWith,
   Subject,
-  type Subscription,
   switchMap,
   tap,
 } from 'rxjs';
 
 import { apiErrorMessage } from '../api-error-message';
-import { collectFunctionRows, type ExportProgress } from './collect-function-rows';
-import { downloadText } from './download-text';
 import { clusterLabel, moduleGroups, moduleIdLabel, moduleLabel } from './filter-options';
 import { DEFAULT_QUERY, hasFilter, PAGE_SIZES, paramsFromQuery, queryFromParams, sameQuery, startOrder } from './function-query';
 import { FunctionsApi, type SnapshotWithCoverage } from './functions-api';
-import { coveragePercent, functionsCsv } from './functions-csv';
+import { coveragePercent } from './functions-csv';
+import { FunctionsCsvExport } from './functions-csv-export';
 import {
   type ClusterSummary,
   type FunctionPage,
@@ -68,12 +65,6 @@ type FilterChoices =
   | { kind: 'loading' }
   | { kind: 'unavailable'; message: string }
   | { kind: 'loaded'; modules: ModuleOption[]; clusters: ClusterSummary[] };
-
-/** A CSV export under way, failed, or none. */
-type ExportState =
-  | { kind: 'idle' }
-  | { kind: 'running'; fetched: number; total: number }
-  | { kind: 'failed'; message: string };
 
 /** Columns before the optional coverage columns. */
 const LEADING_COLUMNS = ['name', 'file', 'cyclomatic', 'essential', 'decisions', 'loc'];
@@ -106,6 +97,7 @@ const SEARCH_DEBOUNCE_MS = 300;
     RouterLink,
     SeverityBandLabel,
   ],
+  providers: [FunctionsCsvExport],
   templateUrl: './functions.html',
   styleUrl: './functions.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -114,8 +106,8 @@ export class Functions {
   private readonly api = inject(FunctionsApi);
   private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
-  private readonly document = inject(DOCUMENT);
-  private readonly destroyRef = inject(DestroyRef);
+  /** The CSV export of the filtered rows. */
+  protected readonly csvExport = inject(FunctionsCsvExport);
 
   private readonly snapshotId$ = this.route.paramMap.pipe(
     map((params) => params.get('snapshotId') ?? ''),
@@ -124,7 +116,6 @@ export class Functions {
   private readonly query$ = this.route.queryParams.pipe(map(queryFromParams), distinctUntilChanged(sameQuery));
   private readonly retry$ = new Subject<void>();
   private readonly searchInput$ = new Subject<string>();
-  private exportSubscription: Subscription | null = null;
   /** The search text last sent to the URL (so URL changes from elsewhere can be told apart). */
   private submittedSearch = '';
 
@@ -239,13 +230,6 @@ export class Functions {
     const overLimit = this.query().overLimit;
     return overLimit === undefined ? 'all' : overLimit ? 'over' : 'within';
   });
-  /** The CSV export's state. */
-  protected readonly exportState = signal<ExportState>({ kind: 'idle' });
-  /** Export progress in percent. */
-  protected readonly exportPercent = computed(() => {
-    const state = this.exportState();
-    return state.kind === 'running' && state.total > 0 ? Math.round((state.fetched / state.total) * 100) : 0;
-  });
 
   protected readonly bands = SEVERITY_BANDS;
   protected readonly bandRanges = BAND_RANGES;
@@ -271,7 +255,6 @@ export class Functions {
         takeUntilDestroyed(),
       )
       .subscribe((text) => this.submitSearch(text));
-    this.destroyRef.onDestroy(() => this.exportSubscription?.unsubscribe());
   }
 
   /** The Flow screen of a function. */
@@ -352,39 +335,13 @@ export class Functions {
 
   /** Fetches every row of the current filters, in the table's order, and downloads them as CSV. */
   protected exportCsv(): void {
-    if (this.exportState().kind === 'running') return;
-    const id = this.snapshotId();
-    const query = this.query();
-    const withCoverage = this.hasCoverage();
-    this.exportState.set({ kind: 'running', fetched: 0, total: this.shown()?.total ?? 0 });
-    this.exportSubscription = collectFunctionRows((page, pageSize) => this.api.page(id, { ...query, page, pageSize }))
-      .subscribe({
-        next: (progress: ExportProgress) => {
-          if (progress.kind === 'progress') {
-            this.exportState.set({ kind: 'running', fetched: progress.fetched, total: progress.total });
-            return;
-          }
-          downloadText(this.document, this.exportFileName(), functionsCsv(progress.rows, withCoverage));
-          this.exportState.set({ kind: 'idle' });
-        },
-        error: (error: unknown) =>
-          this.exportState.set({
-            kind: 'failed',
-            message: error instanceof HttpErrorResponse ? apiErrorMessage(error) : (error as Error).message,
-          }),
-      });
-  }
-
-  /** Stops an export under way. */
-  protected cancelExport(): void {
-    this.exportSubscription?.unsubscribe();
-    this.exportSubscription = null;
-    this.exportState.set({ kind: 'idle' });
-  }
-
-  /** Hides the export's failure message. */
-  protected dismissExportFailure(): void {
-    this.exportState.set({ kind: 'idle' });
+    this.csvExport.start({
+      snapshotId: this.snapshotId(),
+      query: this.query(),
+      withCoverage: this.hasCoverage(),
+      total: this.shown()?.total ?? 0,
+      fileName: this.exportFileName(),
+    });
   }
 
   /** E.g. `functions-v3.14.0.csv`, or `functions-v3.14.0-filtered.csv` with filters. */
