@@ -7,11 +7,11 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
  * filters and pages (the graph and coverage detail live in function_detail).
  */
 @Entity({ name: 'function_metric' })
-@Index('ix_function_metric_cyclomatic', ['snapshotId', 'cyclomatic'])
+@Index('ix_function_metric_cyclomatic', ['snapshotId', 'cyclomatic', 'functionId'])
 @Index('ix_function_metric_file', ['snapshotId', 'file'])
 @Index('ix_function_metric_folder', ['snapshotId', 'folder'])
 @Index('ix_function_metric_cluster', ['snapshotId', 'cluster'])
-@Index('ix_function_metric_band', ['snapshotId', 'band', 'cyclomatic'])
+@Index('ix_function_metric_band', ['snapshotId', 'band', 'cyclomatic', 'functionId'])
 export class FunctionMetric {
   @snapshotKey('function_metric')
   snapshotId!: string;
