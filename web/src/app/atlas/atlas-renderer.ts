@@ -54,6 +54,19 @@ export const ATLAS_RENDERER = new InjectionToken<AtlasRendererFactory>('Atlas re
     import('./sigma-atlas-renderer').then((m) => m.createSigmaAtlasRenderer(container, graph, events, options)),
 });
 
+/**
+ * Maps above this many modules plus links are "large": while their layout runs the links are
+ * not drawn (only the modules move; the links come back when it stops), so each step of the
+ * layout costs the browser a fraction of a full frame. Drawing every link of a 60,000-link map
+ * on each step would keep the main thread busy for as long as one frame takes to draw.
+ */
+export const LARGE_MAP = 3_000;
+
+/** Whether a map is large (see `LARGE_MAP`). */
+export function isLargeMap(graph: Pick<AtlasGraph, 'order' | 'size'>): boolean {
+  return graph.order + graph.size > LARGE_MAP;
+}
+
 /** How long the layout may run for a map of `order` modules (larger maps get longer, up to 20 s). */
 export function layoutBudgetMs(order: number): number {
   return Math.min(20_000, 3_000 + order);

@@ -10,7 +10,7 @@ import type { AtlasGraph } from './atlas-graph';
 import { ATLAS_RENDERER, type AtlasRenderer, type AtlasRendererEvents } from './atlas-renderer';
 import type { AtlasView } from './atlas-view';
 import type { ModuleGraph } from './module-graph';
-import { demoModuleGraph, demoModuleRecords } from './module-graph.fixtures';
+import { demoModuleGraph, demoModuleRecords, moduleNode, moduleRecord } from './module-graph.fixtures';
 import { MemoryPositionStore, POSITION_STORE, positionKey } from './position-cache';
 
 /** Stands in for sigma (jsdom has no WebGL): records what the screen asks of the map. */
@@ -140,6 +140,8 @@ describe('Atlas', () => {
     expect(renderer.layouts).toBe(1);
     expect(page().querySelector('.status')?.textContent).toContain('4 of 4 modules, 3 of 3 links.');
     expect(page().querySelector('.status')?.textContent).toContain('Arranging the map');
+    // A map this small draws its links while it moves.
+    expect(page().querySelector('.status')?.textContent).not.toContain('Links are drawn once it settles');
 
     renderer.settle();
     await settle();
@@ -159,6 +161,18 @@ describe('Atlas', () => {
     ]);
     const dots = Array.from(page().querySelectorAll<HTMLElement>('.legend .dot')).map((dot) => dot.style.background);
     expect(new Set(dots).size).toBe(3);
+  });
+
+  it('should say that a large map draws its links once its layout settles', async () => {
+    const nodes = Array.from({ length: 1_600 }, (_, i) => moduleNode(moduleRecord(`src/area${i}`, { cyclomatic: 1 + (i % 9) })));
+    const links = Array.from({ length: 1_500 }, (_, i): [number, number, number] => [i, i + 1, 1]);
+    await open('/snapshots/s-1/atlas', { level: 'folder', nodes, links, clusters: [] });
+
+    expect(renderers[0].layouts).toBe(1);
+    expect(page().querySelector('.status')?.textContent?.replace(/\s+/g, ' ')).toContain('Arranging the map… Links are drawn once it settles.');
+    renderers[0].settle();
+    await settle();
+    expect(page().querySelector('.status')?.textContent).not.toContain('Links are drawn');
   });
 
   it('should reuse saved positions without laying the map out again', async () => {

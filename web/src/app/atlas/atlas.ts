@@ -24,7 +24,7 @@ import { catchError, map, of, startWith, switchMap } from 'rxjs';
 
 import { apiErrorMessage } from '../api-error-message';
 import { buildAtlasModel, heaviestLinks, neighbourhood, seedPositions, type AtlasModel } from './atlas-graph';
-import { ATLAS_RENDERER, layoutBudgetMs, type AtlasRenderer } from './atlas-renderer';
+import { ATLAS_RENDERER, isLargeMap, layoutBudgetMs, type AtlasRenderer } from './atlas-renderer';
 import { afterNextPaint, markAtlas } from './atlas-timing';
 import type { AtlasView } from './atlas-view';
 import { moduleLabel, MODULE_LEVELS, parseLevel, type ModuleLevel, type ModuleNode } from './module-graph';
@@ -104,6 +104,11 @@ export class Atlas {
   protected readonly minWeight = signal(0);
   /** Where the layout stands. */
   protected readonly layoutState = signal<LayoutState>('idle');
+  /** A large map's links are drawn only once its layout stops. */
+  protected readonly linksWaitForLayout = computed(() => {
+    const graph = this.model()?.graph;
+    return graph !== undefined && isLargeMap(graph);
+  });
   /** Whether a PNG is being made. */
   protected readonly exporting = signal(false);
   /** A problem with export or layout, shown under the toolbar; null when none. */

@@ -5,7 +5,7 @@ import Sigma from 'sigma';
 
 import type { AtlasEdgeAttributes, AtlasGraph, AtlasNodeAttributes } from './atlas-graph';
 import {
-  layoutMovement, nodePositions, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents, type AtlasRendererOptions,
+  isLargeMap, layoutMovement, nodePositions, SETTLED_MOVEMENT, type AtlasRenderer, type AtlasRendererEvents, type AtlasRendererOptions,
 } from './atlas-renderer';
 import { edgeLook, nodeLook, PLAIN_VIEW, type AtlasView } from './atlas-view';
 
@@ -14,14 +14,6 @@ const CHECK_EVERY_MS = 400;
 /** How often the map shows the layout's progress: small maps animate, large ones step. */
 const SMALL_SHOW_EVERY_MS = 60;
 const LARGE_SHOW_EVERY_MS = 1_200;
-
-/**
- * Maps above this many modules plus links are "large": while their layout runs the links are
- * not drawn (only the modules move; the links come back when it stops), so each step of the
- * layout costs the browser a fraction of a full frame. Drawing every link of a 60,000-link map
- * on each step would keep the main thread busy for as long as one frame takes to draw.
- */
-export const LARGE_MAP = 3_000;
 
 /** The layout is not taken as settled before this many rounds, however little the nodes move. */
 export const MIN_LAYOUT_ROUNDS = 60;
@@ -41,7 +33,7 @@ export async function createSigmaAtlasRenderer(
   options: AtlasRendererOptions = {},
 ): Promise<AtlasRenderer> {
   let view: AtlasView = PLAIN_VIEW;
-  const largeMap = graph.order + graph.size > LARGE_MAP;
+  const largeMap = isLargeMap(graph);
   /** Links of a large map are hidden while it is laid out (also in its first frame when a layout follows). */
   let linksHidden = largeMap && options.layoutFollows === true;
   const large = graph.order > 5_000 || graph.size > 20_000;
