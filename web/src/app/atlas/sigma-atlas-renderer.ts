@@ -36,7 +36,7 @@ export async function createSigmaAtlasRenderer(
   const largeMap = isLargeMap(graph);
   /** Links of a large map are hidden while it is laid out (also in its first frame when a layout follows). */
   let linksHidden = largeMap && options.layoutFollows === true;
-  const large = graph.order > 5_000 || graph.size > 20_000;
+  const hugeMap = graph.order > 5_000 || graph.size > 20_000;
   const frames = new FrameCost();
   frames.beforeRender();
   const sigma = new Sigma<AtlasNodeAttributes, AtlasEdgeAttributes>(graph, container, {
@@ -48,7 +48,7 @@ export async function createSigmaAtlasRenderer(
     labelDensity: 0.6,
     zIndex: true,
     // Keeps panning smooth on very large maps.
-    hideEdgesOnMove: large,
+    hideEdgesOnMove: hugeMap,
     nodeReducer: (id, data) => {
       const look = nodeLook(id, data, view);
       return look ? { ...data, ...look } : data;
