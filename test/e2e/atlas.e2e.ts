@@ -1,30 +1,8 @@
 import * as fs from 'node:fs';
 import * as zlib from 'node:zlib';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
-
-interface SnapshotSummary {
-  id: string;
-  status: string;
-  commit?: string | null;
-  root?: string | null;
-  createdAt: string;
-}
-
-/** The demo's "before" snapshot (3.14) of `otterbay-dispatch`, else its oldest ready one. */
-async function demoBeforeSnapshot(page: Page, api: string): Promise<string> {
-  const res = await page.request.get(`${api}/api/codebases`);
-  expect(res.status()).toBe(200);
-  const { items } = (await res.json()) as { items: { name: string; snapshots: SnapshotSummary[] }[] };
-  const ready = (items.find((c) => c.name === 'otterbay-dispatch')?.snapshots ?? []).filter((s) => s.status === 'ready');
-  const before =
-    ready.find((s) => s.root === 'otterbay-before' || s.commit === 'v3.14.0') ??
-    [...ready].sort((a, b) => a.createdAt.localeCompare(b.createdAt))[0];
-  if (!before) throw new Error('the demo codebase otterbay-dispatch has no ready snapshot');
-  return before.id;
-}
+import type { Browser } from 'playwright-core';
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
+import { demoBeforeSnapshot, signInThroughIdp } from './support/demo';
 
 /** Pixel size and the number of distinct RGBA colours of an 8-bit, non-interlaced RGBA or RGB PNG. */
 function pngColours(png: Buffer): { width: number; height: number; colours: number; inkShare: number } {
@@ -77,7 +55,7 @@ function pngColours(png: Buffer): { width: number; height: number; colours: numb
 
 describe('the Atlas screen', () => {
   let browser: Browser;
-  const { api, idp } = stackUrls();
+  const { api } = stackUrls();
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -91,13 +69,9 @@ describe('the Atlas screen', () => {
     const errors: string[] = [];
     page.on('pageerror', (error) => errors.push(error.message));
 
-    await page.goto(`${api}/`);
-    await page.getByRole('button', { name: 'Sign in with SSO' }).click();
-    await page.waitForURL(`${idp}/**`);
-    await page.getByRole('button', { name: /Tomás Reyes/ }).click();
-    await page.waitForURL('**/overview');
+    await signInThroughIdp(page);
 
-    const snapshotId = await demoBeforeSnapshot(page, api);
+    const snapshotId = await demoBeforeSnapshot(page);
     const graph = await page.request.get(`${api}/api/snapshots/${snapshotId}/module-graph?level=folder`);
     expect(graph.status()).toBe(200);
     const core = ((await graph.json()) as { nodes: { id: string; path: string }[] }).nodes.find((n) => n.path === 'src/dispatch-core');
@@ -165,7 +139,7 @@ describe('the Atlas screen', () => {
     expect(png.inkShare).toBeGreaterThan(0.005);
 
     expect(errors).toEqual([]);
-    expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+    expect(offLoopback(hosts)).toEqual([]);
     await context.close();
   }, 120_000);
 });

@@ -1,14 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
-
-interface SnapshotSummary {
-  id: string;
-  status: string;
-  root?: string | null;
-  createdAt: string;
-}
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
+import { demoBeforeSnapshot, signInThroughIdp } from './support/demo';
 
 interface FunctionSummary {
   id: string;
@@ -17,18 +9,6 @@ interface FunctionSummary {
   edges: number;
   decisions: number;
   cyclomaticStrict: number;
-}
-
-/** The demo's "before" snapshot: the oldest ready snapshot of `otterbay-dispatch`. */
-async function demoBeforeSnapshot(page: Page, api: string): Promise<string> {
-  const res = await page.request.get(`${api}/api/codebases`);
-  expect(res.status()).toBe(200);
-  const { items } = (await res.json()) as { items: { name: string; snapshots: SnapshotSummary[] }[] };
-  const demo = items.find((c) => c.name === 'otterbay-dispatch');
-  const ready = (demo?.snapshots ?? []).filter((s) => s.status === 'ready');
-  const before = ready.find((s) => s.root === 'otterbay-before') ?? [...ready].sort((a, b) => a.createdAt.localeCompare(b.createdAt))[0];
-  if (!before) throw new Error('the demo codebase otterbay-dispatch has no ready snapshot');
-  return before.id;
 }
 
 /** The demo's oversized `planDispatch`, as the functions table lists it. */
@@ -43,7 +23,7 @@ async function planDispatch(page: Page, api: string, snapshotId: string): Promis
 
 describe('the Flow screen', () => {
   let browser: Browser;
-  const { api, idp } = stackUrls();
+  const { api } = stackUrls();
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -55,13 +35,9 @@ describe('the Flow screen', () => {
     const page = await context.newPage();
     const hosts = recordRequestHosts(page);
 
-    await page.goto(`${api}/`);
-    await page.getByRole('button', { name: 'Sign in with SSO' }).click();
-    await page.waitForURL(`${idp}/**`);
-    await page.getByRole('button', { name: /Tomás Reyes/ }).click();
-    await page.waitForURL('**/overview');
+    await signInThroughIdp(page);
 
-    const snapshotId = await demoBeforeSnapshot(page, api);
+    const snapshotId = await demoBeforeSnapshot(page);
     const fn = await planDispatch(page, api, snapshotId);
     const detail = (await (await page.request.get(`${api}/api/snapshots/${snapshotId}/functions/${fn.id}`)).json()) as {
       basisPaths: { blocks: number[] }[];
@@ -104,7 +80,7 @@ describe('the Flow screen', () => {
     await expect(page.getByRole('radio', { name: 'Path 2', exact: true }).isChecked()).resolves.toBe(true);
     await expect(page.locator('svg.graph g.block.on-path').count()).resolves.toBe(pathBlocks);
 
-    expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+    expect(offLoopback(hosts)).toEqual([]);
     await context.close();
   }, 120_000);
 });

@@ -1,27 +1,7 @@
 import * as fs from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
-
-interface SnapshotSummary {
-  id: string;
-  status: string;
-  root?: string | null;
-  createdAt: string;
-}
-
-/** The demo's "before" snapshot: the oldest ready snapshot of `otterbay-dispatch`. */
-async function demoBeforeSnapshot(page: Page, api: string): Promise<string> {
-  const res = await page.request.get(`${api}/api/codebases`);
-  expect(res.status()).toBe(200);
-  const { items } = (await res.json()) as { items: { name: string; snapshots: SnapshotSummary[] }[] };
-  const demo = items.find((c) => c.name === 'otterbay-dispatch');
-  const ready = (demo?.snapshots ?? []).filter((s) => s.status === 'ready');
-  const before = ready.find((s) => s.root === 'otterbay-before') ?? [...ready].sort((a, b) => a.createdAt.localeCompare(b.createdAt))[0];
-  if (!before) throw new Error('the demo codebase otterbay-dispatch has no ready snapshot');
-  return before.id;
-}
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
+import { demoBeforeSnapshot, signInThroughIdp } from './support/demo';
 
 /** The text of each cell of one column of the functions table (1-based column). */
 function columnTexts(page: Page, column: number): Promise<string[]> {
@@ -40,7 +20,7 @@ async function settled(page: Page): Promise<void> {
 
 describe('the Functions screen', () => {
   let browser: Browser;
-  const { api, idp } = stackUrls();
+  const { api } = stackUrls();
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -52,13 +32,9 @@ describe('the Functions screen', () => {
     const page = await context.newPage();
     const hosts = recordRequestHosts(page);
 
-    await page.goto(`${api}/`);
-    await page.getByRole('button', { name: 'Sign in with SSO' }).click();
-    await page.waitForURL(`${idp}/**`);
-    await page.getByRole('button', { name: /Tomás Reyes/ }).click();
-    await page.waitForURL('**/overview');
+    await signInThroughIdp(page);
 
-    const snapshotId = await demoBeforeSnapshot(page, api);
+    const snapshotId = await demoBeforeSnapshot(page);
     await page.goto(`${api}/snapshots/${snapshotId}/functions`);
     await page.getByRole('heading', { name: 'Functions', level: 1 }).waitFor();
     await page.locator('table tbody tr').first().waitFor();
@@ -132,7 +108,7 @@ describe('the Functions screen', () => {
     const bandIndex = lines[0].split(',').indexOf('band');
     expect(lines.slice(1, -1).every((line) => line.split(',')[bandIndex] === 'calm')).toBe(true);
 
-    expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+    expect(offLoopback(hosts)).toEqual([]);
     await context.close();
   }, 120_000);
 });

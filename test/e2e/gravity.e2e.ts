@@ -1,30 +1,10 @@
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
-
-interface SnapshotSummary {
-  id: string;
-  status: string;
-  root?: string | null;
-  createdAt: string;
-}
-
-/** The demo's "before" snapshot: the oldest ready snapshot of `otterbay-dispatch`. */
-async function demoBeforeSnapshot(page: Page, api: string): Promise<string> {
-  const res = await page.request.get(`${api}/api/codebases`);
-  expect(res.status()).toBe(200);
-  const { items } = (await res.json()) as { items: { name: string; snapshots: SnapshotSummary[] }[] };
-  const demo = items.find((c) => c.name === 'otterbay-dispatch');
-  const ready = (demo?.snapshots ?? []).filter((s) => s.status === 'ready');
-  const before = ready.find((s) => s.root === 'otterbay-before') ?? [...ready].sort((a, b) => a.createdAt.localeCompare(b.createdAt))[0];
-  if (!before) throw new Error('the demo codebase otterbay-dispatch has no ready snapshot');
-  return before.id;
-}
+import type { Browser } from 'playwright-core';
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
+import { demoBeforeSnapshot, signInThroughIdp } from './support/demo';
 
 describe('the Gravity screen', () => {
   let browser: Browser;
-  const { api, idp } = stackUrls();
+  const { api } = stackUrls();
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -36,13 +16,9 @@ describe('the Gravity screen', () => {
     const page = await context.newPage();
     const hosts = recordRequestHosts(page);
 
-    await page.goto(`${api}/`);
-    await page.getByRole('button', { name: 'Sign in with SSO' }).click();
-    await page.waitForURL(`${idp}/**`);
-    await page.getByRole('button', { name: /Tomás Reyes/ }).click();
-    await page.waitForURL('**/overview');
+    await signInThroughIdp(page);
 
-    const snapshotId = await demoBeforeSnapshot(page, api);
+    const snapshotId = await demoBeforeSnapshot(page);
     await page.goto(`${api}/snapshots/${snapshotId}/gravity?level=folder`);
     await page.getByRole('heading', { name: 'Gravity', level: 1 }).waitFor();
     const ranking = page.getByRole('list', { name: /Gravity ranking of folders/ });
@@ -69,7 +45,7 @@ describe('the Gravity screen', () => {
     expect(new URL(page.url()).searchParams.get('level')).toBe('file');
     await expect(page.getByRole('radio', { name: 'file' }).getAttribute('aria-checked')).resolves.toBe('true');
 
-    expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+    expect(offLoopback(hosts)).toEqual([]);
     await context.close();
   });
 });

@@ -9,9 +9,8 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { buildDemoZip } from '../../api/src/demo/demo-zip';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
+import { signInThroughIdp } from './support/demo';
 
 interface SnapshotJson {
   id: string;
@@ -36,11 +35,7 @@ describe('the Overview', () => {
     page = await context.newPage();
     hosts = recordRequestHosts(page);
 
-    await page.goto(`${api}/`);
-    await page.getByRole('button', { name: 'Sign in with SSO' }).click();
-    await page.waitForURL(`${stackUrls().idp}/**`);
-    await page.getByRole('button', { name: /Tomás Reyes/ }).click();
-    await page.waitForURL('**/overview');
+    await signInThroughIdp(page);
     // A deep link to the screen, as after a reload.
     await page.goto(`${api}/overview`);
     await page.getByRole('heading', { name: 'Overview' }).waitFor();
@@ -123,6 +118,6 @@ describe('the Overview', () => {
     await card.getByRole('table', { name: /Functions by V\(G\) band/ }).waitFor({ state: 'attached' });
     await expect(card.locator('sl-snapshot-status-label').first().textContent()).resolves.toContain('ready');
 
-    expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+    expect(offLoopback(hosts)).toEqual([]);
   }, 180_000);
 });

@@ -1,8 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { DEMO_PEOPLE, DEMO_WORKSPACE } from '../../api/src/demo/demo-people';
-import { launchBrowser, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
+import { launchBrowser, offLoopback, recordRequestHosts, saveScreenshot, stackUrls } from './support/browser';
 
 describe('signing in through the identity-provider fake', () => {
   let browser: Browser;
@@ -57,7 +55,7 @@ describe('signing in through the identity-provider fake', () => {
       const me = await page.request.get(`${api}/api/me`);
       expect(me.status()).toBe(401);
 
-      expect([...hosts].filter((h) => !LOOPBACK.has(h))).toEqual([]);
+      expect(offLoopback(hosts)).toEqual([]);
       await context.close();
     });
   }

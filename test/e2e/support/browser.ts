@@ -38,3 +38,10 @@ export function recordRequestHosts(page: Page): Set<string> {
   });
   return hosts;
 }
+
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
+
+/** The recorded hosts that are not this machine (a page must fetch nothing from outside). */
+export function offLoopback(hosts: Set<string>): string[] {
+  return [...hosts].filter((h) => !LOOPBACK.has(h));
+}
