@@ -34,14 +34,13 @@ export async function queueSnapshot(
   const inputFile = path.join(config.inboxDir, `${id}${input.source === 'upload' ? '.zip' : '.json'}`);
   await fs.promises.rename(input.file, inputFile);
   try {
-    const snapshot = await dataSource.transaction(async (m) => {
-      const saved = await m.getRepository(Snapshot).save({
+    await dataSource.transaction(async (m) => {
+      await m.getRepository(Snapshot).save({
         id, codebaseId: codebase.id, status: 'queued' as const, phase: 'queued', source: input.source, inputFile,
         commit: input.commit ?? null, branch: input.branch ?? null, createdById: viewer.user?.id ?? null,
         settings: { ...effectiveSettings(workspace.settings) },
       });
       await audit(m, viewer, input.source === 'upload' ? 'snapshot.upload' : 'snapshot.push', { type: 'snapshot', id }, { codebase: codebase.name, commit: input.commit ?? null });
-      return saved;
     });
     const jobId = await deps.jobs.enqueueAnalysis(id).catch(async (err: unknown) => {
       await dataSource.getRepository(Snapshot).delete(id);
