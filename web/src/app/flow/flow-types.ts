@@ -1,43 +1,14 @@
 import type { DecisionKind, Outcome } from '../../../../analyzer/src/model/FlowGraph';
-import type { CompactGraph, FunctionKind } from '../../../../analyzer/src/model/FunctionRecord';
+import type { CompactGraph } from '../../../../analyzer/src/model/FunctionRecord';
+import type { FunctionRow } from '../functions/functions-types';
 
 export type { CompactGraph, DecisionKind, Outcome };
 
 /** One decision of a compact graph (its index in `graph.decisions` is its id). */
 export type CompactDecision = CompactGraph['decisions'][number];
 
-/** V(G) band names of the published 1–10 / 11–20 / 21–50 / >50 split. */
-export type SeverityBand = 'calm' | 'busy' | 'tangled' | 'knotted';
-
-/** A function's row as the functions table of the API stores it. */
-export interface FunctionRow {
-  id: string;
-  name: string;
-  qualifiedName: string;
-  kind: FunctionKind;
-  file: string;
-  folder: string | null;
-  package: string | null;
-  cluster: string | null;
-  /** 1-based first and last line in the file. */
-  line: number;
-  endLine: number;
-  loc: number;
-  cyclomatic: number;
-  cyclomaticStrict: number;
-  decisions: number;
-  nodes: number;
-  edges: number;
-  essential: number;
-  designComplexity: number | null;
-  band: SeverityBand;
-  overLimit: boolean;
-  outcomesCovered: number | null;
-  outcomesTotal: number | null;
-  actualComplexity: number | null;
-  untestedPaths: number | null;
-  crap: number | null;
-}
+/** The function's row is the one the Functions table lists (same API columns). */
+export type { FunctionRow, SeverityBand } from '../functions/functions-types';
 
 /** V(G) worked out both ways, with this function's numbers. */
 export interface CyclomaticFormula {
