@@ -32,6 +32,10 @@ async function main() {
   postgres.recreateDatabase('seamline_e2e');
 
   buildAll(root, { serverOut: 'dist/test-server', webOut: 'dist/test-web' });
+  // The server build type-checks the api, analyzer and cross-part tests; jest runs the web
+  // app's tests without types, so they are checked here.
+  step('type-checking the web app\'s tests…');
+  run(path.join(root, 'node_modules/.bin/tsc'), ['-p', 'web/tsconfig.spec.json', '--noEmit'], { cwd: root });
 
   // The end-to-end stack: every process, as `npm start` runs it, on free loopback ports.
   const e2eData = path.join(testDir, 'e2e');

@@ -8,7 +8,7 @@ describe('atlas timing marks', () => {
     marks = [];
     original = performance.mark;
     // jsdom's performance object has no User Timing: record what would be marked.
-    performance.mark = ((name: string) => void marks.push(name)) as Performance['mark'];
+    performance.mark = ((name: string) => void marks.push(name)) as unknown as Performance['mark'];
   });
   afterEach(() => {
     performance.mark = original as Performance['mark'];

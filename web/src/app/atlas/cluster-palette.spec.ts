@@ -2,8 +2,8 @@ import { CLUSTER_HUES, clusterColours, OTHER_COLOUR } from './cluster-palette';
 import type { ModuleCluster } from './module-graph';
 import { demoModuleGraph, moduleRecord } from './module-graph.fixtures';
 
-function cluster(id: string, cyclomatic: number, members: string[] = [id]): ModuleCluster {
-  return { id, members, functions: 1, cyclomatic, decisions: 0, internalWeight: 0, externalWeight: 0 };
+function cluster(id: string, cyclomatic: number, size = 1): ModuleCluster {
+  return { id, size, functions: 1, cyclomatic, decisions: 0, internalWeight: 0, externalWeight: 0 };
 }
 
 describe('clusterColours', () => {
