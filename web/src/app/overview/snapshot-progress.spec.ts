@@ -6,39 +6,12 @@ import type { Snapshot } from '../api-types';
 import { errorBody, snapshot } from '../testing/api-fixtures';
 import {
   EVENT_SOURCE_FACTORY,
-  EventSourceLike,
   isFinal,
   PROGRESS_POLL_MS,
   ProgressUpdate,
   SnapshotProgress,
 } from './snapshot-progress';
-
-/** An EventSource the test drives by hand. */
-class FakeEventSource implements EventSourceLike {
-  onerror: ((event: Event) => void) | null = null;
-  closed = false;
-  private readonly listeners = new Map<string, ((event: MessageEvent<string>) => void)[]>();
-
-  constructor(readonly url: string) {}
-
-  addEventListener(type: string, listener: (event: MessageEvent<string>) => void): void {
-    this.listeners.set(type, [...(this.listeners.get(type) ?? []), listener]);
-  }
-
-  close(): void {
-    this.closed = true;
-  }
-
-  /** Delivers a named event with JSON data, as the server writes it. */
-  emit(type: string, data: unknown): void {
-    const text = typeof data === 'string' ? data : JSON.stringify(data);
-    for (const listener of this.listeners.get(type) ?? []) listener(new MessageEvent(type, { data: text }));
-  }
-
-  fail(): void {
-    this.onerror?.(new Event('error'));
-  }
-}
+import { FakeEventSource } from '../testing/fake-event-source';
 
 const POLL_MS = 2000;
 

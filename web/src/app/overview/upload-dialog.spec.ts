@@ -10,25 +10,9 @@ import { EMPTY } from 'rxjs';
 
 import { codebase, errorBody, snapshot } from '../testing/api-fixtures';
 import { UPLOAD_BACKEND } from './codebases-api';
-import { EVENT_SOURCE_FACTORY, EventSourceLike } from './snapshot-progress';
+import { EVENT_SOURCE_FACTORY } from './snapshot-progress';
 import { UploadDialog, UploadDialogData } from './upload-dialog';
-
-/** An event stream the test drives. */
-class FakeEventSource implements EventSourceLike {
-  onerror: ((event: Event) => void) | null = null;
-  closed = false;
-  private readonly listeners = new Map<string, (event: MessageEvent<string>) => void>();
-  constructor(readonly url: string) {}
-  addEventListener(type: string, listener: (event: MessageEvent<string>) => void): void {
-    this.listeners.set(type, listener);
-  }
-  close(): void {
-    this.closed = true;
-  }
-  emit(type: string, data: unknown): void {
-    this.listeners.get(type)?.(new MessageEvent(type, { data: JSON.stringify(data) }));
-  }
-}
+import { FakeEventSource } from '../testing/fake-event-source';
 
 describe('UploadDialog', () => {
   let fixture: ComponentFixture<UploadDialog>;
