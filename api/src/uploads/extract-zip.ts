@@ -54,7 +54,13 @@ async function unpackFile(zip: ZipFile, entry: Entry, checked: CheckedEntry, wri
 
 async function openEntry(zip: ZipFile, entry: Entry, checked: CheckedEntry): Promise<Readable> {
   try {
-    return await zip.openReadStreamPromise(entry);
+    const stream = await zip.openReadStreamPromise(entry);
+    // yauzl forwards errors to this stream from a setImmediate and its destroy leaves the zlib
+    // handle running, so a broken entry can emit a second error after the write has already
+    // failed with the first and dropped its listeners; unheard, that one would crash the process.
+    // The write's own listeners still receive every error while it reads.
+    stream.on('error', () => undefined);
+    return stream;
   } catch (err) {
     throw refuseEntry('damaged_zip', checked.name, `its data cannot be found in the zip (${(err as Error).message}); the zip is damaged.`);
   }
