@@ -1,10 +1,11 @@
 import type { NextFunction, Request, Response } from 'express';
 import { IsNull, type DataSource } from 'typeorm';
-import { ApiToken, Membership, User } from '../db/entities';
+import { entityRows } from '../db/entity-rows';
+import { ApiToken, Workspace, type Membership, User } from '../db/entities';
 import { UnauthenticatedError } from '../errors';
 import { hashToken } from './api-tokens';
 import { checkCsrf } from './csrf';
-import './session-data';
+import type { Viewer } from './session-data';
 
 /**
  * Finds out who calls: a workspace API token (`Authorization: Bearer …`, for CI) or the browser
@@ -20,17 +21,25 @@ export function authenticate(dataSource: DataSource) {
     }
     const { userId, workspaceId } = req.session ?? {};
     if (!userId || !workspaceId) throw new UnauthenticatedError();
-    const membership = await dataSource.getRepository(Membership).findOne({
-      where: { userId, workspaceId },
-      relations: { user: true, workspace: true },
-    });
-    if (!membership?.user || !membership.workspace) {
-      throw new UnauthenticatedError('Your membership of this workspace has ended. Sign in again.');
-    }
-    req.viewer = { user: membership.user, workspace: membership.workspace, role: membership.role };
+    const viewer = await memberViewer(dataSource, userId, workspaceId);
+    if (!viewer) throw new UnauthenticatedError('Your membership of this workspace has ended. Sign in again.');
+    req.viewer = viewer;
     checkCsrf(req, res);
     next();
   };
+}
+
+/** The member's user, workspace and role, in one plain query (every request asks; see EntityRows). */
+async function memberViewer(dataSource: DataSource, userId: string, workspaceId: string): Promise<Viewer | null> {
+  const users = entityRows(dataSource, User);
+  const workspaces = entityRows(dataSource, Workspace);
+  const [row] = await dataSource.query(
+    `SELECT m.role, ${users.select('u', 'u_')}, ${workspaces.select('w', 'w_')}
+       FROM membership m JOIN app_user u ON u.id = m.user_id JOIN workspace w ON w.id = m.workspace_id
+      WHERE m.user_id = $1 AND m.workspace_id = $2`,
+    [userId, workspaceId],
+  );
+  return row ? { user: users.from(row, 'u_'), workspace: workspaces.from(row, 'w_'), role: row.role as Membership['role'] } : null;
 }
 
 async function authenticateToken(dataSource: DataSource, req: Request, header: string): Promise<void> {

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { Codebase, Snapshot } from '../db/entities';
+import { entityRows } from '../db/entity-rows';
 import { AppError, NotFoundError } from '../errors';
 
 /** A codebase of the caller's workspace, or 404 (another workspace's ids are not even confirmed to exist). */
@@ -9,14 +10,15 @@ export async function codebaseInWorkspace(dataSource: DataSource, workspaceId: s
   return codebase;
 }
 
-/** A snapshot of one of the workspace's codebases, or 404. */
+/** A snapshot of one of the workspace's codebases, or 404. (Every snapshot route asks: plain SQL, see EntityRows.) */
 export async function snapshotInWorkspace(dataSource: DataSource, workspaceId: string, snapshotId: string): Promise<Snapshot> {
-  const snapshot = await dataSource.getRepository(Snapshot).createQueryBuilder('s')
-    .innerJoin('s.codebase', 'c')
-    .where('s.id = :snapshotId AND c.workspace_id = :workspaceId', { snapshotId, workspaceId })
-    .getOne();
-  if (!snapshot) throw new NotFoundError('No such snapshot in this workspace.');
-  return snapshot;
+  const rows = entityRows(dataSource, Snapshot);
+  const [row] = await dataSource.query(
+    `SELECT ${rows.select('s')} FROM snapshot s JOIN codebase c ON c.id = s.codebase_id WHERE s.id = $1 AND c.workspace_id = $2`,
+    [snapshotId, workspaceId],
+  );
+  if (!row) throw new NotFoundError('No such snapshot in this workspace.');
+  return rows.from(row);
 }
 
 /** The same, for reading its analysis: a snapshot that is not ready yet answers 409 with its state. */
