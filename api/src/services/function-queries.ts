@@ -18,7 +18,8 @@ const NULLABLE_SORTS = new Set<keyof typeof SORTABLE>(['crap', 'untestedPaths', 
 /**
  * ORDER BY for a page. Ties break by function id; for columns that are never empty the id runs
  * in the same direction as the column, so an index on (snapshot, column, id) serves the order
- * read forwards or backwards (ix_function_metric_cyclomatic and _band do for V(G)).
+ * read forwards or backwards (ix_function_metric_cyclomatic does for V(G), also within a band;
+ * ix_function_metric_essential for ev(G)).
  */
 function orderBy(sort: keyof typeof SORTABLE, order: 'asc' | 'desc'): string {
   const direction = order.toUpperCase();
@@ -81,7 +82,13 @@ export async function listFunctions(dataSource: DataSource, snapshotId: string, 
     else add(`${level === 'folder' ? 'folder' : 'package'} = ?`, query.module);
   }
   if (query.cluster) add('cluster = ?', query.cluster);
-  if (query.band) add('band = ?', query.band);
+  if (query.band) {
+    // A band is a range of V(G) (the band column is derived from it when stored): as a range, the
+    // (snapshot, V(G), id) index serves the filter, and no index of its own is needed.
+    const band = SEVERITY_BANDS.find((b) => b.band === query.band)!;
+    add('cyclomatic >= ?', band.min);
+    if (Number.isFinite(band.max)) add('cyclomatic <= ?', band.max);
+  }
   if (query.overLimit !== undefined) add('over_limit = ?', query.overLimit);
   const offset = (query.page - 1) * query.pageSize;
   const whereSql = where.join(' AND ');

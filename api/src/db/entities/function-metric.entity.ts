@@ -11,7 +11,6 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
 @Index('ix_function_metric_file', ['snapshotId', 'file'])
 @Index('ix_function_metric_folder', ['snapshotId', 'folder'])
 @Index('ix_function_metric_cluster', ['snapshotId', 'cluster'])
-@Index('ix_function_metric_band', ['snapshotId', 'band', 'cyclomatic', 'functionId'])
 @Index('ix_function_metric_essential', ['snapshotId', 'essential', 'functionId'])
 @Index('ix_function_metric_over_limit', ['snapshotId'], { where: 'over_limit' })
 export class FunctionMetric {

@@ -64,6 +64,15 @@ describe('an analysis through the API', () => {
     expect(noCoverage.map((f) => f.id)).toEqual(descending.map((f) => f.id).sort());
     const over = await request(t.app).get(`/api/snapshots/${snapshotId}/functions?overLimit=true`).set(viewer.headers).expect(200);
     expect(over.body.items.map((f: { name: string }) => f.name)).toEqual(['grade']);
+    // Bands are ranges of V(G): every function is in exactly one, each row says which.
+    const banded: Record<string, string[]> = {};
+    for (const band of ['calm', 'busy', 'tangled', 'knotted']) {
+      const res = await request(t.app).get(`/api/snapshots/${snapshotId}/functions?band=${band}&sort=name&order=asc`).set(viewer.headers).expect(200);
+      expect(res.body.items.every((f: { band: string }) => f.band === band)).toBe(true);
+      expect(res.body.total).toBe(res.body.items.length);
+      banded[band] = res.body.items.map((f: { name: string }) => f.name);
+    }
+    expect(banded).toEqual({ calm: ['<top-level>', '<top-level>', 'price', 'total'], busy: ['grade'], tangled: [], knotted: [] });
     const text = await request(t.app).get(`/api/snapshots/${snapshotId}/functions?q=pric&module=folder:src/pricing`).set(viewer.headers).expect(200);
     // Text matches the qualified name or the file: price() and its file's top-level code.
     expect(text.body.items.map((f: { name: string }) => f.name)).toEqual(['price', '<top-level>']);
