@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { Snapshot as AnalyzedSnapshot } from '../analyzer-lib';
-import { Snapshot } from '../db/entities';
+import { Codebase, Snapshot } from '../db/entities';
 import { createTestWorkspace, openTestDataSource } from '../testing/test-database';
 import { analyseSmallCodebase, createQueuedSnapshot } from '../testing/test-snapshot';
 import { loadSnapshot } from './load-snapshot';
@@ -66,13 +66,29 @@ describe('storeSnapshot and loadSnapshot', () => {
     expect((await dataSource.getRepository(Snapshot).findOneByOrFail({ id: snapshot.id })).status).toBe('queued');
   });
 
-  it('should remove every row of a snapshot with it', async () => {
-    const { snapshot } = await createQueuedSnapshot(dataSource, workspaceId);
-    await storeSnapshot(dataSource, snapshot.id, analysed);
-    await dataSource.getRepository(Snapshot).delete(snapshot.id);
-    for (const table of ['function_metric', 'function_detail', 'module_metric', 'module_edge', 'call_edge', 'import_edge', 'cluster']) {
-      const [{ n }] = await dataSource.query(`SELECT count(*)::int AS n FROM ${table} WHERE snapshot_id = $1`, [snapshot.id]);
-      expect({ table, n }).toEqual({ table, n: 0 });
+  const BULK_TABLES = ['function_metric', 'function_detail', 'module_metric', 'module_edge', 'call_edge', 'import_edge', 'cluster'];
+  const rowsOf = async (snapshotId: string) => {
+    const counts: Record<string, number> = {};
+    for (const table of BULK_TABLES) {
+      counts[table] = (await dataSource.query(`SELECT count(*)::int AS n FROM ${table} WHERE snapshot_id = $1`, [snapshotId]))[0].n;
     }
+    return counts;
+  };
+
+  it('should remove every row of a snapshot with it, deleted alone or with its codebase, and leave other snapshots whole', async () => {
+    const alone = await createQueuedSnapshot(dataSource, workspaceId);
+    const withCodebase = await createQueuedSnapshot(dataSource, workspaceId);
+    const kept = await createQueuedSnapshot(dataSource, workspaceId);
+    for (const { snapshot } of [alone, withCodebase, kept]) await storeSnapshot(dataSource, snapshot.id, analysed);
+    const stored = await rowsOf(kept.snapshot.id);
+    expect(Object.values(stored).every((n) => n > 0)).toBe(true);
+
+    await dataSource.getRepository(Snapshot).delete(alone.snapshot.id);
+    await dataSource.getRepository(Codebase).delete(withCodebase.codebase.id);
+
+    const none = Object.fromEntries(BULK_TABLES.map((table) => [table, 0]));
+    expect(await rowsOf(alone.snapshot.id)).toEqual(none);
+    expect(await rowsOf(withCodebase.snapshot.id)).toEqual(none);
+    expect(await rowsOf(kept.snapshot.id)).toEqual(stored);
   });
 });

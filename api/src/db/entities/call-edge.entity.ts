@@ -1,6 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** Calls from one function to another, merged per kind and certainty (the analyzer's CallEdge). */
 @Entity({ name: 'call_edge' })
@@ -9,9 +8,6 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
 export class CallEdgeRow {
   @snapshotKey('call_edge')
   snapshotId!: string;
-
-  @snapshotRelation('call_edge')
-  snapshot?: Snapshot;
 
   /** Position in the snapshot's list. */
   @PrimaryColumn({ type: 'integer', primaryKeyConstraintName: 'PK_call_edge' })

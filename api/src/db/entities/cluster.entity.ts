@@ -1,15 +1,11 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** A candidate boundary: modules Louvain grouped together at one level. */
 @Entity({ name: 'cluster' })
 export class ClusterRow {
   @snapshotKey('cluster')
   snapshotId!: string;
-
-  @snapshotRelation('cluster')
-  snapshot?: Snapshot;
 
   /** Cluster ids (`c1`, `c2`…) are numbered per level. */
   @PrimaryColumn({ type: 'varchar', length: 8, primaryKeyConstraintName: 'PK_cluster' })

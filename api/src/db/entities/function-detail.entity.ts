@@ -1,16 +1,12 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { CompactGraph } from '../../analyzer-lib';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** The wide part of a function: its stored graph, covered outcomes and (when embedded) source. */
 @Entity({ name: 'function_detail' })
 export class FunctionDetail {
   @snapshotKey('function_detail')
   snapshotId!: string;
-
-  @snapshotRelation('function_detail')
-  snapshot?: Snapshot;
 
   @PrimaryColumn({ name: 'function_id', type: 'text', primaryKeyConstraintName: 'PK_function_detail' })
   functionId!: string;

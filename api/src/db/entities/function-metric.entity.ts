@@ -1,6 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /**
  * One function unit of a snapshot with its metrics: the narrow row the functions table sorts,
@@ -16,9 +15,6 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
 export class FunctionMetric {
   @snapshotKey('function_metric')
   snapshotId!: string;
-
-  @snapshotRelation('function_metric')
-  snapshot?: Snapshot;
 
   /** The analyzer's stable id (file, qualified name, ordinal). */
   @PrimaryColumn({ name: 'function_id', type: 'text', primaryKeyConstraintName: 'PK_function_metric' })

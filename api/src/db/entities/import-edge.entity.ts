@@ -1,15 +1,11 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** An import of one scanned file by another. */
 @Entity({ name: 'import_edge' })
 export class ImportEdgeRow {
   @snapshotKey('import_edge')
   snapshotId!: string;
-
-  @snapshotRelation('import_edge')
-  snapshot?: Snapshot;
 
   @PrimaryColumn({ type: 'integer', primaryKeyConstraintName: 'PK_import_edge' })
   ordinal!: number;

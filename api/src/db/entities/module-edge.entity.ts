@@ -1,15 +1,11 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** Calls and imports between two modules of one level (module ids carry their level). */
 @Entity({ name: 'module_edge' })
 export class ModuleEdgeRow {
   @snapshotKey('module_edge')
   snapshotId!: string;
-
-  @snapshotRelation('module_edge')
-  snapshot?: Snapshot;
 
   @PrimaryColumn({ name: 'from_module', type: 'text', primaryKeyConstraintName: 'PK_module_edge' })
   fromModule!: string;

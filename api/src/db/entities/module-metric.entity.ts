@@ -1,6 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
-import type { Snapshot } from './snapshot.entity';
-import { snapshotKey, snapshotRelation } from './snapshot-owned';
+import { snapshotKey } from './snapshot-owned';
 
 /** One module (file, folder or package) of a snapshot with its aggregated figures and gravity. */
 @Entity({ name: 'module_metric' })
@@ -8,9 +7,6 @@ import { snapshotKey, snapshotRelation } from './snapshot-owned';
 export class ModuleMetric {
   @snapshotKey('module_metric')
   snapshotId!: string;
-
-  @snapshotRelation('module_metric')
-  snapshot?: Snapshot;
 
   /** `<level>:<path>`. */
   @PrimaryColumn({ name: 'module_id', type: 'text', primaryKeyConstraintName: 'PK_module_metric' })
