@@ -14,6 +14,12 @@ describe('loadConfig', () => {
     expect(config.dataDir).toBe(path.resolve('.data'));
   });
 
+  it('should run analyses at a lower CPU priority unless told otherwise, within the range nice allows', () => {
+    expect(loadConfig(secret).jobs.nice).toBe(10);
+    expect(loadConfig({ ...secret, SEAMLINE_WORKER_NICE: '0' }).jobs.nice).toBe(0);
+    expect(() => loadConfig({ ...secret, SEAMLINE_WORKER_NICE: '20' })).toThrow(/SEAMLINE_WORKER_NICE/);
+  });
+
   it('should derive the SAML URLs from the public URL', () => {
     const config = loadConfig({ ...secret, SEAMLINE_PUBLIC_URL: 'https://seamline.otterbay.example/' });
     expect(config.saml.spEntityId).toBe('https://seamline.otterbay.example/api/auth/saml/metadata');

@@ -37,6 +37,7 @@ const schema = z.object({
   SEAMLINE_JOB_RETRIES: z.coerce.number().int().min(0).max(10).default(2),
   SEAMLINE_JOB_STALE_SECONDS: z.coerce.number().int().min(5).max(3600).default(30),
   SEAMLINE_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
+  SEAMLINE_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(10),
 });
 
 export interface Config {
@@ -79,6 +80,8 @@ export interface Config {
     staleSeconds: number;
     /** Jobs one worker process runs at once. */
     concurrency: number;
+    /** CPU priority (nice) of worker processes: analyses yield to the API's readers. */
+    nice: number;
   };
 }
 
@@ -134,6 +137,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       retries: e.SEAMLINE_JOB_RETRIES,
       staleSeconds: e.SEAMLINE_JOB_STALE_SECONDS,
       concurrency: e.SEAMLINE_WORKER_CONCURRENCY,
+      nice: e.SEAMLINE_WORKER_NICE,
     },
   };
 }

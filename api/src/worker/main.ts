@@ -6,6 +6,7 @@ import { createDataSource } from '../db/data-source';
 import { QUEUES, analyseJobOptions, startJobQueue, type AnalyseJobData, type ProbeResult } from '../jobs/job-queue';
 import { createLogger } from '../logger';
 import { onShutdown } from '../process/shutdown';
+import { lowerPriority } from './priority';
 import { runAnalysisJob } from './analysis-job';
 import { recoverStaleJobs } from './stale-jobs';
 
@@ -13,6 +14,8 @@ import { recoverStaleJobs } from './stale-jobs';
 async function main(): Promise<void> {
   const config = loadConfig();
   const logger = createLogger('worker', config.logLevel);
+  // Before any thread starts: analyses run behind the API's readers (see priority.ts).
+  const nice = lowerPriority(config.jobs.nice);
   const name = `${os.hostname()}:${process.pid}`;
   fs.mkdirSync(config.workDir, { recursive: true });
   const dataSource = await createDataSource(config.databaseUrl).initialize();
@@ -30,7 +33,7 @@ async function main(): Promise<void> {
   const reaper = setInterval(() => {
     recoverStaleJobs(dataSource, boss, config.jobs.staleSeconds, logger).catch((err: Error) => logger.error({ err }, 'stale job check failed'));
   }, Math.max(2000, (config.jobs.staleSeconds * 1000) / 2));
-  logger.info({ worker: name, queues: Object.values(QUEUES), concurrency: config.jobs.concurrency }, 'worker connected to the job queue');
+  logger.info({ worker: name, queues: Object.values(QUEUES), concurrency: config.jobs.concurrency, nice }, 'worker connected to the job queue');
   onShutdown(logger, async () => {
     clearInterval(reaper);
     await boss.stop({ graceful: true, wait: true, timeout: 8000 });
