@@ -28,6 +28,9 @@ function orderBy(sort: keyof typeof SORTABLE, order: 'asc' | 'desc'): string {
     : `${SORTABLE[sort]} ${direction}, function_id ${direction}`;
 }
 
+/** Rows skipped from which a page reads its ids before its rows (see listFunctions). */
+const DEEP_PAGE_OFFSET = 500;
+
 export const functionQuerySchema = z.object({
   sort: z.enum(Object.keys(SORTABLE) as [keyof typeof SORTABLE, ...(keyof typeof SORTABLE)[]]).default('cyclomatic'),
   order: z.enum(['asc', 'desc']).default('desc'),
@@ -68,7 +71,7 @@ export class FunctionCounts {
 }
 
 /** One page of a snapshot's functions, sorted and filtered in the database. */
-export async function listFunctions(dataSource: DataSource, snapshotId: string, query: FunctionQuery, counts = new FunctionCounts()) {
+export async function listFunctions(dataSource: DataSource, snapshotId: string, query: FunctionQuery, counts = new FunctionCounts(), deepPageOffset = DEEP_PAGE_OFFSET) {
   const where = ['snapshot_id = $1'];
   const params: unknown[] = [snapshotId];
   const add = (sql: string, value: unknown) => {
@@ -92,9 +95,13 @@ export async function listFunctions(dataSource: DataSource, snapshotId: string, 
   if (query.overLimit !== undefined) add('over_limit = ?', query.overLimit);
   const offset = (query.page - 1) * query.pageSize;
   const whereSql = where.join(' AND ');
-  // The page's ids first (from an index alone where one fits the filter and order), then only
-  // those rows: a deep page does not read every row it skips.
-  const pageSql = `SELECT ${ROW_COLUMNS} FROM function_metric
+  // A deep page reads its ids first (from an index alone where one fits the filter and order),
+  // then only those rows, so it does not fetch every row it skips. Near the top that costs more
+  // than it saves: planning and running the two-level query took 0.55 ms in PostgreSQL against
+  // 0.21 ms for the plain one (a band's third page, 50,000 functions).
+  const pageSql = offset < deepPageOffset
+    ? `SELECT ${ROW_COLUMNS} FROM function_metric WHERE ${whereSql} ORDER BY ${orderBy(query.sort, query.order)} LIMIT ${query.pageSize} OFFSET ${offset}`
+    : `SELECT ${ROW_COLUMNS} FROM function_metric
     WHERE snapshot_id = $1 AND function_id IN (SELECT function_id FROM function_metric WHERE ${whereSql} ORDER BY ${orderBy(query.sort, query.order)} LIMIT ${query.pageSize} OFFSET ${offset})
     ORDER BY ${orderBy(query.sort, query.order)}`;
   const [items, total] = await Promise.all([

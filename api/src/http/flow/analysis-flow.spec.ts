@@ -1,5 +1,6 @@
 import * as fs from 'node:fs';
 import request from 'supertest';
+import { functionQuerySchema, listFunctions } from '../../services/function-queries';
 import { SMALL_CODEBASE } from '../../testing/test-snapshot';
 import { openTestApp, type TestApp } from '../../testing/test-app';
 import { createTestWorkspace } from '../../testing/test-database';
@@ -78,6 +79,25 @@ describe('an analysis through the API', () => {
     expect(text.body.items.map((f: { name: string }) => f.name)).toEqual(['price', '<top-level>']);
     const bad = await request(t.app).get(`/api/snapshots/${snapshotId}/functions?sort=colour`).set(viewer.headers).expect(400);
     expect(bad.body.error.message).toMatch(/sort/);
+  });
+
+  it('should give the same pages whether a page reads its ids first (deep pages) or not', async () => {
+    const sorts = Object.keys(functionQuerySchema.shape.sort.removeDefault().enum);
+    for (const sort of sorts) {
+      for (const order of ['asc', 'desc']) {
+        for (const filter of [{}, { band: 'calm' }, { q: 'price' }]) {
+          const walk = async (deepPageOffset: number) => {
+            const names: string[] = [];
+            for (let page = 1; page <= 3; page++) {
+              const query = functionQuerySchema.parse({ sort, order, pageSize: '2', page: String(page), ...filter });
+              names.push(...(await listFunctions(t.dataSource, snapshotId, query, undefined, deepPageOffset)).items.map((f: { id: string }) => f.id));
+            }
+            return names;
+          };
+          expect({ sort, order, filter, ids: await walk(0) }).toEqual({ sort, order, filter, ids: await walk(1000) });
+        }
+      }
+    }
   });
 
   it('should open one function with its graph, formula and basis paths', async () => {
