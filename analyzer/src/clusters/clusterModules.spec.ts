@@ -39,6 +39,10 @@ describe('clusterModules', () => {
     ]);
     expect(assignment.get('file:a2.ts')).toBe('c2');
     expect(assignment.size).toBe(7);
+    // The same partition by index, for gravity: modules in id order, clusters by position.
+    const { community } = clusterModules(modules, edges, 'file', DEFAULT_MAP_SETTINGS);
+    const ids = modules.map((m) => m.id).sort();
+    expect([...community].map((c, i) => [ids[i], clusters[c].id])).toEqual(ids.map((id) => [id, assignment.get(id)]));
   });
 
   it('should sum P, ΣV and decisions, and split the weight into inside and between (a→b plus b→a, no self-loop)', () => {
@@ -75,7 +79,7 @@ describe('clusterModules', () => {
     const result = clusterModules([moduleRecord('x.ts'), moduleRecord('y.ts')], [], 'file', DEFAULT_MAP_SETTINGS);
     expect(result.clusters.map((c) => c.members)).toEqual([['file:x.ts'], ['file:y.ts']]);
     expect(result.modularity).toBe(0);
-    expect(clusterModules([], [], 'file', DEFAULT_MAP_SETTINGS)).toEqual({ clusters: [], assignment: new Map(), modularity: 0 });
+    expect(clusterModules([], [], 'file', DEFAULT_MAP_SETTINGS)).toEqual({ clusters: [], assignment: new Map(), modularity: 0, community: new Int32Array(0) });
   });
 
   it('should refuse an edge to an unknown module, a negative weight and a module listed twice', () => {

@@ -10,6 +10,7 @@
  */
 import type { ModuleEdge, ModuleLevel } from '../model';
 import { ClusterInputError } from './ClusterInputError';
+import { indexLevelEdges, type LevelEdges } from './levelIndex';
 
 /** Undirected pairs as parallel arrays: `lo[k] < hi[k]` index into the module ids. */
 export interface MergedEdges {
@@ -21,26 +22,24 @@ export interface MergedEdges {
 
 /** Merges `level`'s edges between the modules `ids` into undirected weighted pairs. */
 export function mergeModuleEdges(ids: readonly string[], edges: readonly ModuleEdge[], level: ModuleLevel): MergedEdges {
-  const index = new Map<string, number>();
-  ids.forEach((id, i) => index.set(id, i));
-  const n = ids.length;
-  const rawLo = new Int32Array(edges.length);
-  const rawHi = new Int32Array(edges.length);
-  const rawW = new Float64Array(edges.length);
+  return mergeLevelEdges(indexLevelEdges(ids, edges, level, (message) => new ClusterInputError(message)));
+}
+
+/** The same from an indexed level (indexLevel), which has refused bad edges and dropped self-loops. */
+export function mergeLevelEdges(level: LevelEdges): MergedEdges {
+  const n = level.ids.length;
+  const count = level.size;
+  const rawLo = new Int32Array(count);
+  const rawHi = new Int32Array(count);
   const start = new Int32Array(n + 1);
-  let count = 0;
-  for (const e of edges) {
-    if (e.level !== level) continue;
-    const a = index.get(e.from);
-    const b = index.get(e.to);
-    if (a === undefined || b === undefined) throw new ClusterInputError(`edge ${e.from} → ${e.to} names a module that is not among the ${level} modules`);
-    if (!Number.isFinite(e.weight) || e.weight < 0) throw new ClusterInputError(`edge ${e.from} → ${e.to} has weight ${e.weight}; weights must be finite and ≥ 0`);
-    if (a === b || e.weight === 0) continue;
-    rawLo[count] = a < b ? a : b;
-    rawHi[count] = a < b ? b : a;
-    rawW[count++] = e.weight;
-    start[(a < b ? a : b) + 1]++;
+  for (let k = 0; k < count; k++) {
+    const a = level.from[k];
+    const b = level.to[k];
+    rawLo[k] = a < b ? a : b;
+    rawHi[k] = a < b ? b : a;
+    start[rawLo[k] + 1]++;
   }
+  const rawW = level.weight;
   for (let i = 0; i < n; i++) start[i + 1] += start[i];
 
   // Bucket by the lower index, then sort and merge each bucket by the higher index.

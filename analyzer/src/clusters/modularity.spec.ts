@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { UndirectedGraph } from 'graphology';
 import graphologyModularity from 'graphology-metrics/graph/modularity.js';
 import { ClusterInputError } from './ClusterInputError';
-import { modularity, type WeightedPair } from './modularity';
+import { mergeModuleEdges } from './mergeModuleEdges';
+import { modularity, pairModularity, type WeightedPair } from './modularity';
 
 /** Two triangles a-b-c and d-e-f joined by the edge c-d of weight `bridge`. */
 function twoTriangles(bridge: number): WeightedPair[] {
@@ -74,6 +75,26 @@ describe('modularity', () => {
         expect(modularity(pairs, community, resolution)).toBeCloseTo(reference, 12);
       }),
       { numRuns: 500 },
+    );
+  });
+
+  it('should give the same Q from merged index pairs and community numbers (pairModularity) as graphology-metrics', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 14 }).chain((n) => fc.record({
+        n: fc.constant(n),
+        edges: fc.array(fc.record({ a: fc.nat(n - 1), b: fc.nat(n - 1), w: fc.integer({ min: 0, max: 9 }) }), { minLength: 1, maxLength: 40 }),
+        labels: fc.array(fc.nat(3), { minLength: n, maxLength: n }),
+        resolution: fc.double({ min: 0.1, max: 3, noNaN: true }),
+      })), ({ n, edges, labels, resolution }) => {
+        const ids = Array.from({ length: n }, (_, i) => `file:m${String(i).padStart(2, '0')}.ts`);
+        const moduleEdges = edges.map(({ a, b, w }) => ({ level: 'file' as const, from: ids[a], to: ids[b], weight: w, calls: w, imports: 0 }));
+        const pairs = mergeModuleEdges(ids, moduleEdges, 'file');
+        const withoutLoops = edges.filter(({ a, b, w }) => a !== b && w > 0).map(({ a, b, w }) => ({ from: String(a), to: String(b), weight: w }));
+        const reference = withoutLoops.length === 0 ? 0
+          : graphologyModularity(toGraphology(withoutLoops), { getNodeCommunity: (node: string) => labels[Number(node)], getEdgeWeight: 'weight', resolution });
+        expect(pairModularity(pairs, Int32Array.from(labels), 4, resolution)).toBeCloseTo(reference, 12);
+      }),
+      { numRuns: 300 },
     );
   });
 

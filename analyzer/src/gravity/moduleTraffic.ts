@@ -11,6 +11,7 @@
  * module and per cluster instead of sets.
  */
 import type { ModuleEdge, ModuleLevel } from '../model';
+import { indexLevelEdges, type LevelEdges } from '../clusters/levelIndex';
 import { GravityInputError } from './GravityInputError';
 
 /** Per-module facts, each array indexed like the module ids given. */
@@ -30,31 +31,20 @@ export interface ModuleTraffic {
 
 /** Counts the traffic of the modules `ids` (see the file header). */
 export function moduleTraffic(ids: readonly string[], edges: readonly ModuleEdge[], assignment: ReadonlyMap<string, string>, level: ModuleLevel): ModuleTraffic {
-  const n = ids.length;
-  const index = new Map<string, number>();
-  ids.forEach((id, i) => index.set(id, i));
-  const cluster = clusterIndexes(ids, assignment);
+  return levelTraffic(indexLevelEdges(ids, edges, level, (message) => new GravityInputError(message)), clusterIndexes(ids, assignment));
+}
 
-  // Pass 1: degrees; pass 2: fill flat adjacency (CSR) for out- and in-edges.
-  const keptEdge = new Int32Array(edges.length);
-  const keptFrom = new Int32Array(edges.length);
-  const keptTo = new Int32Array(edges.length);
-  let m = 0;
+/** The same from an indexed level and each module's cluster as a small integer (below the module count). */
+export function levelTraffic(level: LevelEdges, cluster: Int32Array): ModuleTraffic {
+  const n = level.ids.length;
+  const m = level.size;
+  // Flat adjacency (CSR) for out- and in-edges: degrees, then fill.
   const outStart = new Int32Array(n + 1);
   const inStart = new Int32Array(n + 1);
-  edges.forEach((e, k) => {
-    if (e.level !== level) return;
-    const a = index.get(e.from);
-    const b = index.get(e.to);
-    if (a === undefined || b === undefined) throw new GravityInputError(`edge ${e.from} → ${e.to} names a module that is not among the ${level} modules`);
-    if (!Number.isFinite(e.weight) || e.weight < 0) throw new GravityInputError(`edge ${e.from} → ${e.to} has weight ${e.weight}; weights must be finite and ≥ 0`);
-    if (a === b || e.weight === 0) return;
-    keptEdge[m] = k;
-    keptFrom[m] = a;
-    keptTo[m++] = b;
-    outStart[a + 1]++;
-    inStart[b + 1]++;
-  });
+  for (let k = 0; k < m; k++) {
+    outStart[level.from[k] + 1]++;
+    inStart[level.to[k] + 1]++;
+  }
   for (let i = 0; i < n; i++) {
     outStart[i + 1] += outStart[i];
     inStart[i + 1] += inStart[i];
@@ -66,9 +56,9 @@ export function moduleTraffic(ids: readonly string[], edges: readonly ModuleEdge
   const outFill = outStart.slice(0, n);
   const inFill = inStart.slice(0, n);
   for (let t = 0; t < m; t++) {
-    const w = edges[keptEdge[t]].weight;
-    const a = keptFrom[t];
-    const b = keptTo[t];
+    const w = level.weight[t];
+    const a = level.from[t];
+    const b = level.to[t];
     outTo[outFill[a]] = b;
     outW[outFill[a]++] = w;
     inFrom[inFill[b]] = a;
@@ -134,7 +124,7 @@ export function moduleTraffic(ids: readonly string[], edges: readonly ModuleEdge
 }
 
 /** Cluster of each module as a small integer; modules without one get a cluster of their own. */
-function clusterIndexes(ids: readonly string[], assignment: ReadonlyMap<string, string>): Int32Array {
+export function clusterIndexes(ids: readonly string[], assignment: ReadonlyMap<string, string>): Int32Array {
   const byName = new Map<string, number>();
   const cluster = new Int32Array(ids.length);
   let next = 0;

@@ -10,12 +10,13 @@
  *
  * [Reference]: our own score; see docs/metrics/gravity.md.
  */
+import { indexLevel, type LevelIndex } from '../clusters/levelIndex';
 import type { ModuleEdge, ModuleLevel, ModuleRecord } from '../model';
 import { GravityInputError } from './GravityInputError';
 import { gravityReasons } from './gravityReasons';
 import { gravityComponents, gravityOf, gravityPoints, type GravityFacts, type LevelMedians } from './gravityScore';
 import { medianOf } from './medianOf';
-import { moduleTraffic } from './moduleTraffic';
+import { clusterIndexes, levelTraffic } from './moduleTraffic';
 
 /** One module's gravity, its rank at its level, the reasons, spread and cohesion. */
 export interface GravityResult {
@@ -28,10 +29,15 @@ export interface GravityResult {
 
 /** Gravity of `level`'s modules given their clusters (see the file header). */
 export function rankGravity(modules: ModuleRecord[], edges: ModuleEdge[], assignment: Map<string, string>, level: ModuleLevel): Map<string, GravityResult> {
-  const own = modules.filter((m) => m.level === level);
-  const ids = own.map((m) => m.id);
-  if (new Set(ids).size !== ids.length) throw new GravityInputError(`a ${level} module is listed twice`);
-  const traffic = moduleTraffic(ids, edges, assignment, level);
+  const indexed = indexLevel(modules, edges, level, (message) => new GravityInputError(message));
+  return rankLevelGravity(indexed, clusterIndexes(indexed.ids, assignment));
+}
+
+/** The same from an indexed level and each module's cluster as a small integer (below the module count). */
+export function rankLevelGravity(level: LevelIndex, cluster: Int32Array): Map<string, GravityResult> {
+  const own = level.modules;
+  const ids = level.ids;
+  const traffic = levelTraffic(level, cluster);
   const medians: LevelMedians = {
     callers: medianOf(traffic.callers),
     callees: medianOf(traffic.callees),

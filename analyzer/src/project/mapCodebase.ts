@@ -9,9 +9,9 @@
 import type { CallGraphResult } from '../call-graph/buildCallGraph';
 import { callGraphOfProgram } from '../call-graph/callGraphOfProgram';
 import { fromCompactGraph } from '../cfg/compactGraph';
-import { clusterModules } from '../clusters/clusterModules';
+import { clusterLevel, indexModuleLevel } from '../clusters/clusterModules';
 import { callBlocksOf, designComplexity } from '../design/designComplexity';
-import { rankGravity } from '../gravity/rankGravity';
+import { rankLevelGravity } from '../gravity/rankGravity';
 import type { ClusterRecord, CountingSettings, FunctionRecord, MapSettings, ModuleLevel, ModuleRecord, Snapshot } from '../model';
 import { buildModuleMap } from '../modules/buildModuleMap';
 import { countAbstractness } from '../modules/countAbstractness';
@@ -75,10 +75,12 @@ export function mapCodebase(input: MapInput, functions: FunctionRecord[]): Pick<
     const members = modules.filter((m) => m.level === level);
     if (members.length === 0) continue;
     const edges = moduleEdges.filter((e) => e.level === level);
-    const clustered = clusterModules(members, edges, level, input.mapSettings);
+    // One index of the level for both: mapping module ids is the costly part on large maps.
+    const indexed = indexModuleLevel(members, edges, level);
+    const clustered = clusterLevel(indexed, input.mapSettings);
     if (level === 'file') modularity = clustered.modularity;
     clusters.push(...clustered.clusters);
-    const gravity = rankGravity(members, edges, clustered.assignment, level);
+    const gravity = rankLevelGravity(indexed, clustered.community);
     for (const m of members) {
       const g = gravity.get(m.id);
       placed.push({ ...m, cluster: clustered.assignment.get(m.id) ?? null, gravity: g?.gravity ?? 0, gravityRank: g?.rank ?? 0, reasons: g?.reasons ?? [] });
