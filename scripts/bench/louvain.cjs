@@ -1,8 +1,8 @@
 // Clustering and gravity on a generated 100,000-module graph (average degree 10, weighted edges).
 // Baseline: plain graphology Louvain on the same undirected graph, built beforehand. Also timed:
 // building that graphology graph from the merged pairs (a floor any graphology-based clustering of
-// a snapshot pays). Ours: clusterModules + rankGravity from ModuleRecords and ModuleEdges
-// (merging the directed edges and building the graph included).
+// a snapshot pays). Ours: what mapCodebase runs per level from ModuleRecords and ModuleEdges —
+// indexModuleLevel, clusterLevel, rankLevelGravity (merging the edges and building the graph included).
 // Needs the compiled analyzer: `npx tsc -p tsconfig.analyzer.json` (dist/analyzer/analyzer/src/…).
 // Usage: node scripts/bench/louvain.cjs [modules=100000] [rounds=3]
 // Prints one JSON line per measurement, then a summary line with the medians and their ratio.
@@ -12,8 +12,8 @@ const louvain = require('graphology-communities-louvain');
 const seedrandom = require('seedrandom');
 
 const dist = process.env.SEAMLINE_ANALYZER_DIST ?? path.resolve(__dirname, '../../dist/analyzer/analyzer/src');
-const { clusterModules } = require(path.join(dist, 'clusters/clusterModules.js'));
-const { rankGravity } = require(path.join(dist, 'gravity/rankGravity.js'));
+const { clusterLevel, indexModuleLevel } = require(path.join(dist, 'clusters/clusterModules.js'));
+const { rankLevelGravity } = require(path.join(dist, 'gravity/rankGravity.js'));
 
 const N = Number(process.argv[2] ?? 100_000);
 const ROUNDS = Number(process.argv[3] ?? 3);
@@ -104,10 +104,13 @@ for (let round = 0; round < ROUNDS; round++) {
   const plain = time(() => louvain.detailed(graph, { rng: seedrandom(SEED), getEdgeWeight: 'weight' }));
   baseline.push(plain.ms);
   console.log(JSON.stringify({ task: 'graphology-louvain', round, ms: plain.ms, communities: plain.value.count, modularity: plain.value.modularity }));
-  const cluster = time(() => clusterModules(modules, edges, 'file', settings));
-  const gravity = time(() => rankGravity(modules, edges, cluster.value.assignment, 'file'));
-  ours.push(cluster.ms + gravity.ms);
-  console.log(JSON.stringify({ task: 'clusterModules+rankGravity', round, ms: cluster.ms + gravity.ms, clusterMs: cluster.ms, gravityMs: gravity.ms, clusters: cluster.value.clusters.length, modularity: cluster.value.modularity }));
+  // As mapCodebase runs each level: one index of the level, then clusters, then gravity.
+  const indexed = time(() => indexModuleLevel(modules, edges, 'file'));
+  const cluster = time(() => clusterLevel(indexed.value, settings));
+  const gravity = time(() => rankLevelGravity(indexed.value, cluster.value.community));
+  const total = indexed.ms + cluster.ms + gravity.ms;
+  ours.push(total);
+  console.log(JSON.stringify({ task: 'index+clusterLevel+rankLevelGravity', round, ms: total, indexMs: indexed.ms, clusterMs: cluster.ms, gravityMs: gravity.ms, clusters: cluster.value.clusters.length, modularity: cluster.value.modularity }));
 }
 const louvainMs = median(baseline);
 const buildMs = median(builds);
