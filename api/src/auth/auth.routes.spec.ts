@@ -47,6 +47,22 @@ describe('SAML sign-in through the identity-provider fake', () => {
     });
   });
 
+  it('stores the anti-forgery token with the session at sign-in, so later reads never write the session', async () => {
+    // express-session writes a regenerated session again as the sign-in response ends, after the
+    // redirect went out; a token added by the next request could be overwritten by that write.
+    const agent = request.agent(h.app);
+    const acs = await postToAcs(agent, (await freshResponse(h, agent, architect.email)).samlResponse).expect(303);
+    const sid = decodeURIComponent(sessionCookie(acs)!.split('=')[1]).slice(2).split('.')[0];
+    const stored = async () => (await h.dataSource.query('SELECT sess FROM http_session WHERE sid = $1', [sid]))[0].sess;
+    const atSignIn = await stored();
+    expect(atSignIn.csrfToken).toEqual(expect.any(String));
+
+    const me = await agent.get('/api/me').expect(200);
+    const xsrf = ([] as string[]).concat(me.headers['set-cookie'] ?? []).find((c) => c.startsWith('XSRF-TOKEN='));
+    expect(xsrf?.split(';')[0]).toBe(`XSRF-TOKEN=${atSignIn.csrfToken}`);
+    expect(await stored()).toEqual(atSignIn);
+  });
+
   it('issues a new session ID on sign-in (rotation)', async () => {
     const agent = request.agent(h.app);
     // A first sign-in gives the browser a session cookie; signing in again must replace it.

@@ -8,6 +8,11 @@ export const CSRF_COOKIE = 'XSRF-TOKEN';
 export const CSRF_HEADER = 'x-xsrf-token';
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
+/** A fresh anti-forgery token (sessions get theirs when they start; see startSession). */
+export function newCsrfToken(): string {
+  return randomBytes(24).toString('base64url');
+}
+
 /**
  * Cross-site request forgery guard for cookie sessions (double submit, bound to the session):
  * the session keeps a random token, the browser gets it in a cookie only same-origin script can
@@ -16,7 +21,7 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  */
 export function checkCsrf(req: Request, res: Response): void {
   const session = req.session;
-  if (!session.csrfToken) session.csrfToken = randomBytes(24).toString('base64url');
+  if (!session.csrfToken) session.csrfToken = newCsrfToken();
   res.cookie(CSRF_COOKIE, session.csrfToken, { sameSite: 'strict', secure: req.secure, httpOnly: false, path: '/' });
   if (SAFE_METHODS.has(req.method)) return;
   // Compared as bytes: a header of the same length in characters may differ in bytes.

@@ -39,9 +39,8 @@ export async function signInOverHttp(apiUrl: string, email: string): Promise<Api
   const me = await fetch(`${apiUrl}/api/me`, { headers: { Cookie: cookieHeader() } });
   keep(me);
   if (me.status !== 200) throw new Error(`signed in, but /api/me answered ${me.status}`);
-  // This answer stores the session's new anti-forgery token; express-session sends the headers
-  // before that write ends and the body's last bytes after it, so read the body to the end
-  // before the token is used (a change sent sooner may find a session without it: 403).
+  // The session holds its anti-forgery token from sign-in on (startSession); this answer hands it
+  // out as the XSRF-TOKEN cookie. Read to the end so no request of this session overlaps another.
   await me.text();
   const csrf = jar.get('XSRF-TOKEN');
   if (!csrf) throw new Error('the API set no XSRF-TOKEN cookie');
