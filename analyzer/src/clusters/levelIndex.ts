@@ -3,9 +3,10 @@
  * =======================================
  * Clustering and gravity both read a level's directed module edges as pairs of module indexes.
  * Mapping 10^5 module ids and 10^6 edge ends through a Map is the costly part of that, so it is
- * done once here and shared: the level's modules, their ids, and the kept edges as parallel arrays. Self-loops and zero weights are dropped (they change neither clusters nor
- * traffic); an edge naming a module that is not at the level, or with a negative or non-finite
- * weight, is refused with the caller's error type, and so is a module listed twice.
+ * done once here and shared: the level's modules, their ids, and the kept edges as parallel
+ * arrays. Self-loops and zero weights are dropped (they change neither clusters nor traffic); an
+ * edge naming a module that is not at the level, or with a negative or non-finite weight, is
+ * refused with the caller's error type, and so is a module listed twice.
  */
 import type { ModuleEdge, ModuleLevel, ModuleRecord } from '../model';
 

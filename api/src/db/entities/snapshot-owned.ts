@@ -7,7 +7,8 @@ import { Snapshot } from './snapshot.entity';
  * modules, module, call and import edges, clusters) have no foreign key: checking it for each of a
  * large snapshot's million rows doubled the time to store it, while the store holds the snapshot
  * row locked anyway. A trigger on snapshot deletes their rows instead (migration
- * SnapshotRowsByTrigger). Smaller tables that point at a snapshot keep a foreign key (snapshotRelation).
+ * SnapshotRowsByTrigger). Smaller tables that point at a snapshot keep a foreign key
+ * (snapshotRelation).
  */
 export function snapshotKey(table: string) {
   return function (target: object, property: string): void {
