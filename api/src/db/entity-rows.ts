@@ -8,21 +8,28 @@ import type { DataSource, EntityTarget, ObjectLiteral } from 'typeorm';
  * value conversion, so the result is the same instance a `find` returns (relations not loaded).
  */
 export class EntityRows<T extends ObjectLiteral> {
-  private readonly columns;
+  private readonly metadata;
+  private readonly selects = new Map<string, string>();
 
-  constructor(private readonly dataSource: DataSource, private readonly target: EntityTarget<T>) {
-    this.columns = dataSource.getMetadata(target).columns;
+  constructor(private readonly dataSource: DataSource, target: EntityTarget<T>) {
+    this.metadata = dataSource.getMetadata(target);
   }
 
-  /** The table's columns, qualified by `alias` and renamed `prefix` + column (for joins). */
+  /** The table's columns, qualified by `alias` and renamed `prefix` + column (for joins); made once per alias. */
   select(alias: string, prefix = ''): string {
-    return this.columns.map((c) => `${alias}."${c.databaseName}"${prefix ? ` AS "${prefix}${c.databaseName}"` : ''}`).join(', ');
+    const key = `${alias}\u0000${prefix}`;
+    let list = this.selects.get(key);
+    if (list === undefined) {
+      list = this.metadata.columns.map((c) => `${alias}."${c.databaseName}"${prefix ? ` AS "${prefix}${c.databaseName}"` : ''}`).join(', ');
+      this.selects.set(key, list);
+    }
+    return list;
   }
 
   /** The entity held in `row` (columns named `prefix` + column). */
   from(row: Record<string, unknown>, prefix = ''): T {
-    const entity = this.dataSource.getMetadata(this.target).create() as T;
-    for (const column of this.columns) {
+    const entity = this.metadata.create() as T;
+    for (const column of this.metadata.columns) {
       column.setEntityValue(entity, this.dataSource.driver.prepareHydratedValue(row[prefix + column.databaseName], column));
     }
     return entity;
