@@ -5,7 +5,7 @@
  * graph cross-checked against the decisions counted on the syntax tree, ev(G), lines, name, id
  * and fingerprint. Pure: text in, plain records out; nothing of the code is executed.
  */
-import { ts } from 'ts-morph';
+import { ts } from './compiler';
 import { buildFlowGraph } from './cfg/buildFlowGraph';
 import { toCompactGraph } from './cfg/compactGraph';
 import { countDecisions } from './decisions/countDecisions';

@@ -18,7 +18,7 @@
  * [Reference]: TypeScript compiler API, `TypeChecker.getResolvedSignature`, `getSymbolAtLocation`,
  * `getAliasedSymbol` (common practice).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import { DispatchIndex, resolveAlias } from './DispatchIndex';
 import { packageOfFile, STANDARD_LIBRARY } from './externalPackage';
 import { skipWrappers, type IndexedUnit, type UnitIndex } from './UnitIndex';

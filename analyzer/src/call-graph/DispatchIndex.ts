@@ -15,7 +15,7 @@
  * [Reference]: class hierarchy analysis (Dean, Grove & Chambers, ECOOP 1995), restricted to
  * declared subtypes (from memory).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { UnitIndex } from './UnitIndex';
 
 type HeritageOwner = ts.ClassLikeDeclaration | ts.InterfaceDeclaration;

@@ -9,7 +9,7 @@
  *
  * [Reference]: analyzeSource.ts (ids), units/findUnits.ts (units).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import { countDecisions } from '../decisions/countDecisions';
 import type { CountingSettings, FunctionKind } from '../model';
 import { findUnits } from '../units/findUnits';

@@ -13,7 +13,7 @@
  * [Reference]: TypeScript compiler API, `TypeChecker.getResolvedSignature` (common practice).
  */
 import * as path from 'node:path';
-import type { ts } from 'ts-morph';
+import type { ts } from '../compiler';
 import type { CountingSettings } from '../model';
 import { CallGraphCollector, messageOf } from './CallGraphCollector';
 import { CallResolver } from './CallResolver';

@@ -18,7 +18,7 @@
  *
  * [Reference]: unit boundaries as in cfg/unitBoundaries.ts; TypeScript's syntax kinds (common practice).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import { isTypeOrAmbient } from '../cfg/unitBoundaries';
 import type { CallKind } from '../model';
 import type { CallLike, CallResolver, CallTarget } from './CallResolver';

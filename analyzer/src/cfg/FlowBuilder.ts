@@ -6,7 +6,7 @@
  * their own files (statements, loops, switch, try, conditions, values, patterns) and reach each
  * other through the dispatch methods here, so no file imports another at run time in a cycle.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { CountingSettings } from '../model/CountingSettings';
 import type { DecisionKind, FlowGraph } from '../model/FlowGraph';
 import { buildCondition } from './buildCondition';

@@ -12,7 +12,7 @@
  * Decisions are numbered in source order when the graph is finished (by span start, then span
  * end, then creation), so equal code gives equal decision ids.
  */
-import type { ts } from 'ts-morph';
+import type { ts } from '../compiler';
 import type { BasicBlock, BlockKind, Decision, DecisionKind, FlowEdge, FlowGraph, Outcome } from '../model/FlowGraph';
 import { FlowGraphError } from './FlowGraphError';
 import { spanOf } from './sourceSpan';

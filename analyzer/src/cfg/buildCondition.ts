@@ -22,7 +22,7 @@
  *
  * [Reference]: McCabe 1976, IEEE TSE SE-2(4): `IF C1 AND C2` is two predicates.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 
 const K = ts.SyntaxKind;

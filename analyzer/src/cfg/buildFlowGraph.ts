@@ -18,7 +18,7 @@
  * [Reference]: McCabe 1976, IEEE TSE SE-2(4) (program control graph, v = e − n + 2p);
  * Watson & McCabe, NIST SP 500-235 §2, §4 (binary decisions: v = π + 1).
  */
-import type { ts } from 'ts-morph';
+import type { ts } from '../compiler';
 import type { CountingSettings } from '../model/CountingSettings';
 import type { FlowGraph } from '../model/FlowGraph';
 import { buildParameters } from './buildPatterns';

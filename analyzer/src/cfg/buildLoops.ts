@@ -16,7 +16,7 @@
  *
  * [Reference]: McCabe 1976, IEEE TSE SE-2(4): while and repeat-until each have v = 2.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 import { buildDeclarations } from './buildPatterns';
 import type { JumpTarget } from './FlowScope';

@@ -8,7 +8,7 @@
  * inline (its own `&&`, `?:`… still count). Computed keys and assignment targets are built as
  * values. Patterns nest no deeper than the parser nested them.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 import { isAssignmentPattern } from './unitBoundaries';
 

@@ -8,7 +8,7 @@
  * Function declarations, type-only and ambient statements hold no runtime code. A namespace body
  * runs in place. `else if` chains are walked with a loop.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 import { buildDoWhile, buildFor, buildForInOf, buildWhile } from './buildLoops';
 import { buildDeclarations } from './buildPatterns';

@@ -18,7 +18,7 @@
  *
  * [Reference]: Watson & McCabe, NIST SP 500-235 §4: each `case` label adds 1, `default` adds nothing.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 
 const K = ts.SyntaxKind;

@@ -31,7 +31,7 @@
  *    │        └──▶[work()]──▶[F]──┐                               (normal completion: through F)
  *    └────────────────────────────┘
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FlowBuilder } from './FlowBuilder';
 import type { HeldJump, JumpTarget } from './FlowScope';
 

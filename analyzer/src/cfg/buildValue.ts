@@ -18,7 +18,7 @@
  * [Reference]: McCabe 1976, IEEE TSE SE-2(4) (each condition of a compound predicate is a
  * predicate); Watson & McCabe, NIST SP 500-235 §4 (short-circuit operators are hidden decisions).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { DecisionKind } from '../model/FlowGraph';
 import type { FlowBuilder } from './FlowBuilder';
 import { forEachClassPart, forEachParentPart, isAssignmentPattern, isTypeOrAmbient, isUnitBoundary } from './unitBoundaries';

@@ -1,4 +1,4 @@
-import type { ts } from 'ts-morph';
+import type { ts } from '../compiler';
 import type { SourceSpan } from '../model/FlowGraph';
 
 /** Longest condition text kept on a decision. */

@@ -15,7 +15,7 @@
  *   everything inside `declare namespace`) hold no runtime code and are skipped.
  * - A namespace body runs as part of the code around it (the file's top-level code).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import { FlowGraphError } from './FlowGraphError';
 
 const K = ts.SyntaxKind;

@@ -18,7 +18,7 @@
  * [Reference]: Watson & McCabe, NIST SP 500-235 §4.1 (v = π + 1 for binary decisions, source-level
  * counting); ESLint 9 `complexity` rule for the optional constructs (reference-checks §8).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import {
   forEachClassPart,
   forEachParentPart,

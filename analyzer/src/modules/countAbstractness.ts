@@ -10,7 +10,7 @@
  * [Reference]: R. C. Martin, Agile Software Development: Principles, Patterns, and Practices
  * (2002), the Stable Abstractions Principle: A = abstract classes and interfaces / all classes.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 
 /** Interfaces and abstract classes (`abstract`) among all classes and interfaces (`total`) of a file. */
 export function countAbstractness(sourceFile: ts.SourceFile): { abstract: number; total: number } {

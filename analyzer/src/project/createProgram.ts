@@ -24,7 +24,8 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { Project, ts } from 'ts-morph';
+import { Project } from 'ts-morph';
+import { ts } from '../compiler';
 import { ScanInputError } from './ScanInputError';
 
 /** What the program is built from. */

@@ -15,7 +15,7 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 
 /** A package: its folder (posix, relative to the root; `.` for the root) and name. */
 export interface PackageFolder {

@@ -1,6 +1,6 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { SkippedFile } from '../model';
 import { ScanInputError } from './ScanInputError';
 

@@ -2,7 +2,7 @@ import * as fs from 'node:fs';
 import * as path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { FunctionRecord } from '../model';
-import { mapCodebase, type MapInput } from './mapCodebase';
+import type { mapCodebase, MapInput } from './mapCodebase';
 
 /** Stack for the module-map thread: the checker overflows Node's default on very large files (stack.md). */
 const MAP_STACK_MB = 256;
@@ -13,7 +13,11 @@ const MAP_STACK_MB = 256;
  */
 export function mapInThread(input: MapInput, functions: FunctionRecord[]): Promise<ReturnType<typeof mapCodebase>> {
   const script = path.join(__dirname, 'mapWorker.js');
-  if (!fs.existsSync(script)) return Promise.resolve(mapCodebase(input, functions));
+  if (!fs.existsSync(script)) {
+    // Loaded here only: the map's modules (ts-morph, graphology) would slow every scan's start.
+    const { mapCodebase: mapHere } = require('./mapCodebase') as typeof import('./mapCodebase');
+    return Promise.resolve(mapHere(input, functions));
+  }
   return new Promise((resolve, reject) => {
     const worker = new Worker(script, { workerData: { input, functions }, resourceLimits: { stackSizeMb: MAP_STACK_MB } });
     let settled = false;

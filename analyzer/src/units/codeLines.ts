@@ -8,7 +8,7 @@
  * operand — the usual heuristic, which can misjudge a line in rare code such as `return /re/`,
  * and then only by a line.
  */
-import type { ts } from 'ts-morph';
+import type { ts } from '../compiler';
 
 const enum Ch {
   Tab = 9, LineFeed = 10, CarriageReturn = 13, Space = 32, DoubleQuote = 34, Dollar = 36, SingleQuote = 39,

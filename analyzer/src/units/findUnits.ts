@@ -9,7 +9,7 @@
  * gets a qualified name built from the classes, namespaces, named object literals and
  * functions around it, e.g. `OrderService.assignCourier` or `routes.<anonymous>@42`.
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 import type { FunctionKind } from '../model';
 import { ANONYMOUS, propertyNameText, unitName } from './unitName';
 

@@ -13,7 +13,7 @@
  * building strings — a fingerprint identifies code, it does not protect anything.
  * [Reference]: Fowler, Noll, Vo, "FNV hash" (common practice for fast non-cryptographic hashing).
  */
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 
 const PRIME = 16777619;
 

@@ -1,4 +1,4 @@
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 
 /** Name given to a unit that has none of its own (display form adds `@line`). */
 export const ANONYMOUS = '<anonymous>';

@@ -1,4 +1,4 @@
-import { ts } from 'ts-morph';
+import { ts } from '../compiler';
 
 /**
  * Where a unit starts and ends: 1-based lines of its first and last character, leading
