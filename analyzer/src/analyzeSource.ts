@@ -14,7 +14,7 @@ import { cyclomaticOf, reportedCyclomatic } from './metrics/cyclomatic';
 import type { CountingSettings, FunctionRecord } from './model';
 import { CodeLines } from './units/codeLines';
 import { findUnits } from './units/findUnits';
-import { fingerprint } from './units/fingerprint';
+import { fingerprintOf } from './units/fingerprint';
 import { unitId } from './units/unitId';
 import { unitSpan } from './units/unitSpan';
 
@@ -55,13 +55,12 @@ export interface SourceAnalysis {
 export function analyzeSource(file: string, text: string, settings: CountingSettings, options: AnalyzeOptions = {}): SourceAnalysis {
   // JSDoc says nothing about control flow; not parsing it saves a third of the parse on documented code.
   const parseOptions = { languageVersion: ts.ScriptTarget.Latest, jsDocParsingMode: ts.JSDocParsingMode.ParseNone };
-  const sourceFile = ts.createSourceFile(file, text, parseOptions, true, scriptKindOf(file));
+  // Parents are linked by findUnits' walk, more cheaply than by the parser's own pass.
+  const sourceFile = ts.createSourceFile(file, text, parseOptions, false, scriptKindOf(file));
   const syntaxError = firstSyntaxError(sourceFile);
   if (syntaxError) throw new SourceSyntaxError(file, syntaxError.line, syntaxError.column, syntaxError.message);
 
   const units = findUnits(sourceFile, (field) => countDecisions(field, sourceFile, settings).total > 0);
-  const unitNodes = new Set<ts.Node>(units.map((u) => u.node));
-  const isNestedUnit = (n: ts.Node) => unitNodes.has(n);
   const codeLines = new CodeLines(sourceFile);
   const ordinals = new Map<string, number>();
   const lastLine = sourceFile.getLineStarts().length;
@@ -91,7 +90,7 @@ export function analyzeSource(file: string, text: string, settings: CountingSett
       edges: measured.edges,
       // A graph with at most one decision is always an if or a loop, which reduces (NIST SP 500-235 §10.2).
       essential: decisions.total <= 1 ? 1 : essentialComplexity(graph).essential,
-      fingerprint: fingerprint(unit.node, isNestedUnit),
+      fingerprint: fingerprintOf(unit.nodes),
       unresolvedCalls: 0,
       externalCalls: 0,
       graph: toCompactGraph(graph),

@@ -1,5 +1,6 @@
 import { ts } from 'ts-morph';
 import { findUnits } from './findUnits';
+import { unitNodes } from './fingerprint';
 
 // Stands in for the decision count: nested functions' decisions never belong to the field.
 const fieldHasDecision = (f: ts.PropertyDeclaration) => !!f.initializer && !ts.isArrowFunction(f.initializer) && /\?|&&|\|\|/.test(f.initializer.getText());
@@ -97,5 +98,43 @@ describe('unit spans', () => {
     const sf = ts.createSourceFile('a.ts', 'class A {\n  /** doc */\n  @Get()\n  static\n  m() {\n  }\n}', ts.ScriptTarget.Latest, true);
     const method = (sf.statements[0] as ts.ClassDeclaration).members[0];
     expect(unitSpan(method, sf)).toMatchObject({ line: 4, endLine: 6 });
+  });
+
+  describe('the walk', () => {
+    const code = `
+      type Handler = (event: { kind: string }) => void;
+      class Courier<T extends Base> implements Runner {
+        private pick = (xs: number[]) => xs.filter((x) => x > 1) ?? [];
+        static { init(); }
+        get load(): number { return this.items.length || 0; }
+        run(this: Courier<T>, [a, b]: [number, string] = [1, 'x']) { return { go() { return a; }, [b]: (c?: T) => c }; }
+      }
+      export const table = { rows: function () { return 1 as unknown as Handler; } };
+    `;
+
+    it('lists the nodes of each unit in pre-order, as fingerprints read them', () => {
+      const sf = ts.createSourceFile('sample.ts', code, ts.ScriptTarget.Latest, true);
+      const found = findUnits(sf, () => true);
+      const isUnit = new Set(found.map((u) => u.node));
+      expect(found.length).toBeGreaterThan(8);
+      for (const unit of found) expect(unit.nodes).toEqual(unitNodes(unit.node, (n) => isUnit.has(n)));
+    });
+
+    it('links every node to its parent in a tree parsed without parents', () => {
+      const sf = ts.createSourceFile('sample.ts', code, ts.ScriptTarget.Latest, false);
+      const unlinked: ts.Node[] = [];
+      const collect = (n: ts.Node) => ts.forEachChild(n, (c) => void (c.parent === undefined && unlinked.push(c), collect(c)));
+      collect(sf);
+      expect(unlinked.length).toBeGreaterThan(50);
+      findUnits(sf, () => true);
+      const wrong: string[] = [];
+      const check = (n: ts.Node) =>
+        ts.forEachChild(n, (c) => {
+          if (c.parent !== n) wrong.push(ts.SyntaxKind[c.kind]);
+          check(c);
+        });
+      check(sf);
+      expect(wrong).toEqual([]);
+    });
   });
 });

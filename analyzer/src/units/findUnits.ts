@@ -21,47 +21,92 @@ export interface FoundUnit {
   qualifiedName: string;
   /** For ids: anonymous parts without line numbers, so moving code does not rename them. */
   stableName: string;
+  /**
+   * The unit's own nodes in source order (pre-order), the unit itself first; a nested unit is
+   * listed but not its insides. What `unitNodes` gives, gathered on this walk (fingerprints use it).
+   */
+  nodes: ts.Node[];
 }
 
-interface Frame {
-  node: ts.Node;
+/** Where a run of nodes stands: the names around it (display and stable form) and its unit's node list. */
+interface Scope {
   display: string[];
   stable: string[];
+  nodes: ts.Node[];
 }
 
-/** Every unit of the file, top-level code first, then in source order. */
+/**
+ * Every unit of the file, top-level code first, then in source order. The walk also links each
+ * node to its parent: analyzeSource parses without the compiler's own linking pass, which walks
+ * the tree once more and more slowly (docs/benchmarks.md); trees that already have parents (a
+ * program's files) get the same links again.
+ */
 export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.PropertyDeclaration) => boolean): FoundUnit[] {
-  const units: FoundUnit[] = [{ node: sourceFile, kind: 'top-level', name: '<top-level>', qualifiedName: '<top-level>', stableName: '<top-level>' }];
-  const stack: Frame[] = [];
-  pushChildren(stack, sourceFile, [], []);
-  while (stack.length > 0) {
-    const { node, display, stable } = stack.pop()!;
-    // Types hold no code to run, so no units; skipping them spares much of a typed file.
-    if (ts.isTypeNode(node) && !ts.isExpressionWithTypeArguments(node)) continue;
+  const topLevel: ts.Node[] = [sourceFile];
+  const units: FoundUnit[] = [{ node: sourceFile, kind: 'top-level', name: '<top-level>', qualifiedName: '<top-level>', stableName: '<top-level>', nodes: topLevel }];
+  // Two parallel stacks: the nodes still to visit (they come off in pre-order), and the scope each one stands in.
+  const nodes: ts.Node[] = [];
+  const scopes: Scope[] = [];
+  pushChildren(nodes, scopes, sourceFile, { display: [], stable: [], nodes: topLevel });
+  while (nodes.length > 0) {
+    const node = nodes.pop()!;
+    const scope = scopes.pop()!;
+    // Types hold no code to run, so no units; their nodes are only linked and listed.
+    if (ts.isTypeNode(node) && !ts.isExpressionWithTypeArguments(node)) {
+      linkAndList(node, scope.nodes);
+      continue;
+    }
+    scope.nodes.push(node);
+    // Counting a field's decisions reads parents below it (an object literal's methods).
+    if (node.kind === ts.SyntaxKind.PropertyDeclaration) linkParents(node);
     const kind = unitKind(node, hasDecision);
     if (kind) {
       const own = unitName(node, sourceFile);
       const line = sourceFile.getLineAndCharacterOfPosition(node.getStart(sourceFile)).line + 1;
       const name = own ?? `${ANONYMOUS}@${line}`;
-      const qualifiedName = [...display, name].join('.');
-      const stableName = [...stable, own ?? ANONYMOUS].join('.');
-      units.push({ node, kind, name, qualifiedName, stableName });
-      pushChildren(stack, node, [...display, name], [...stable, own ?? ANONYMOUS]);
+      const qualifiedName = [...scope.display, name].join('.');
+      const stableName = [...scope.stable, own ?? ANONYMOUS].join('.');
+      const unitNodes = [node];
+      units.push({ node, kind, name, qualifiedName, stableName, nodes: unitNodes });
+      pushChildren(nodes, scopes, node, { display: [...scope.display, name], stable: [...scope.stable, own ?? ANONYMOUS], nodes: unitNodes });
     } else {
-      const scope = scopeName(node, sourceFile);
-      if (scope) pushChildren(stack, node, [...display, scope], [...stable, scope]);
-      else pushChildren(stack, node, display, stable);
+      const name = scopeName(node, sourceFile);
+      pushChildren(nodes, scopes, node, name ? { display: [...scope.display, name], stable: [...scope.stable, name], nodes: scope.nodes } : scope);
     }
   }
   return units;
 }
 
-function pushChildren(stack: Frame[], node: ts.Node, display: string[], stable: string[]): void {
-  const children: ts.Node[] = [];
+// Children go on the stack last first, so they come off in source order.
+function pushChildren(nodes: ts.Node[], scopes: Scope[], node: ts.Node, scope: Scope): void {
+  const start = nodes.length;
   ts.forEachChild(node, (child) => {
-    children.push(child);
+    (child as { parent: ts.Node }).parent = node;
+    nodes.push(child);
+    scopes.push(scope);
   });
-  for (let i = children.length - 1; i >= 0; i--) stack.push({ node: children[i], display, stable });
+  for (let i = start, j = nodes.length - 1; i < j; i++, j--) {
+    const first = nodes[i];
+    nodes[i] = nodes[j];
+    nodes[j] = first;
+  }
+}
+
+/** Links every node under `node` to its parent. */
+function linkParents(node: ts.Node): void {
+  ts.forEachChild(node, (child) => {
+    (child as { parent: ts.Node }).parent = node;
+    linkParents(child);
+  });
+}
+
+/** Lists `node` and every node under it in pre-order, linking each to its parent. */
+function linkAndList(node: ts.Node, list: ts.Node[]): void {
+  list.push(node);
+  ts.forEachChild(node, (child) => {
+    (child as { parent: ts.Node }).parent = node;
+    linkAndList(child, list);
+  });
 }
 
 function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) => boolean): FunctionKind | undefined {

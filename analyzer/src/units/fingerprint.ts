@@ -51,14 +51,38 @@ const LITERAL = -3;
 
 /** 16 hex digits identifying the normalised body; `isNestedUnit` marks the units inside it. */
 export function fingerprint(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean): string {
-  // One walk records the token stream; names are resolved afterwards, because a local may be
+  return fingerprintOf(unitNodes(node, isNestedUnit));
+}
+
+/**
+ * The unit's own nodes in pre-order (source order), the unit first: a nested unit is listed,
+ * its insides are not. findUnits gathers the same lists on its walk of the file.
+ */
+export function unitNodes(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean): ts.Node[] {
+  const listed: ts.Node[] = [];
+  const stack: ts.Node[] = [node];
+  while (stack.length > 0) {
+    const n = stack.pop()!;
+    listed.push(n);
+    if (n !== node && isNestedUnit(n)) continue;
+    const start = stack.length;
+    ts.forEachChild(n, (c) => {
+      stack.push(c);
+    });
+    for (let i = start, j = stack.length - 1; i < j; i++, j--) [stack[i], stack[j]] = [stack[j], stack[i]];
+  }
+  return listed;
+}
+
+/** The fingerprint of a unit from its own nodes, as `unitNodes` lists them. */
+export function fingerprintOf(nodes: readonly ts.Node[]): string {
+  // The token stream is recorded first and names resolved afterwards, because a local may be
   // used before its declaration (a hoisted function, a closure).
   const kinds: number[] = [];
   const texts: string[] = [];
   const locals = new Map<string, number>();
-  const stack: ts.Node[] = [node];
-  while (stack.length > 0) {
-    const n = stack.pop()!;
+  for (let i = 0; i < nodes.length; i++) {
+    const n = nodes[i];
     const kind = n.kind;
     if (kind === ts.SyntaxKind.Identifier || kind === ts.SyntaxKind.PrivateIdentifier) {
       const text = (n as ts.Identifier).text;
@@ -75,12 +99,6 @@ export function fingerprint(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean
     kinds.push(kind);
     if (kind === ts.SyntaxKind.BinaryExpression) kinds.push((n as ts.BinaryExpression).operatorToken.kind);
     else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) kinds.push((n as ts.PrefixUnaryExpression).operator);
-    if (n !== node && isNestedUnit(n)) continue;
-    const start = stack.length;
-    ts.forEachChild(n, (c) => {
-      stack.push(c);
-    });
-    for (let i = start, j = stack.length - 1; i < j; i++, j--) [stack[i], stack[j]] = [stack[j], stack[i]];
   }
   const hash = new Fnv64();
   let t = 0;
