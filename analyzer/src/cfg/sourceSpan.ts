@@ -20,19 +20,17 @@ function isSpace(code: number): boolean {
 
 /** Source text of `[start, end)` with whitespace runs collapsed to one space, cut to 120 characters with an ellipsis. */
 export function collapsedText(text: string, start: number, end: number): string {
+  // Whole runs of non-space characters are copied at once, not character by character.
   let out = '';
-  let pendingSpace = false;
-  for (let i = start; i < end; i++) {
-    const code = text.charCodeAt(i);
-    if (isSpace(code)) {
-      pendingSpace = out.length > 0;
+  let run = -1;
+  for (let i = start; i <= end; i++) {
+    if (i < end && !isSpace(text.charCodeAt(i))) {
+      if (run < 0) run = i;
       continue;
     }
-    if (pendingSpace) {
-      out += ' ';
-      pendingSpace = false;
-    }
-    out += text[i];
+    if (run < 0) continue;
+    out = out === '' ? text.slice(run, i) : `${out} ${text.slice(run, i)}`;
+    run = -1;
     if (out.length > MAX_DECISION_TEXT) return `${out.slice(0, MAX_DECISION_TEXT - 1)}…`;
   }
   return out;

@@ -62,8 +62,7 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
     const kind = unitKind(node, hasDecision);
     if (kind) {
       const own = unitName(node, sourceFile);
-      const line = sourceFile.getLineAndCharacterOfPosition(node.getStart(sourceFile)).line + 1;
-      const name = own ?? `${ANONYMOUS}@${line}`;
+      const name = own ?? `${ANONYMOUS}@${sourceFile.getLineAndCharacterOfPosition(node.getStart(sourceFile)).line + 1}`;
       const qualifiedName = [...scope.display, name].join('.');
       const stableName = [...scope.stable, own ?? ANONYMOUS].join('.');
       const unitNodes = [node];

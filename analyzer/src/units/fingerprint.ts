@@ -76,43 +76,35 @@ export function unitNodes(node: ts.Node, isNestedUnit: (n: ts.Node) => boolean):
 
 /** The fingerprint of a unit from its own nodes, as `unitNodes` lists them. */
 export function fingerprintOf(nodes: readonly ts.Node[]): string {
-  // The token stream is recorded first and names resolved afterwards, because a local may be
-  // used before its declaration (a hoisted function, a closure).
-  const kinds: number[] = [];
-  const texts: string[] = [];
+  // Locals are numbered in a first pass, because one may be used before its declaration (a
+  // hoisted function, a closure); the second pass hashes the token stream.
   const locals = new Map<string, number>();
+  for (let i = 0; i < nodes.length; i++) {
+    const n = nodes[i];
+    if ((n.kind === ts.SyntaxKind.Identifier || n.kind === ts.SyntaxKind.PrivateIdentifier) && isDeclarationName(n)) {
+      const text = (n as ts.Identifier).text;
+      if (!locals.has(text)) locals.set(text, locals.size);
+    }
+  }
+  const hash = new Fnv64();
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i];
     const kind = n.kind;
     if (kind === ts.SyntaxKind.Identifier || kind === ts.SyntaxKind.PrivateIdentifier) {
       const text = (n as ts.Identifier).text;
-      if (isDeclarationName(n) && !locals.has(text)) locals.set(text, locals.size);
-      kinds.push(isPropertyName(n) ? NAME : LOCAL);
-      texts.push(text);
-      continue;
-    }
-    if (kind >= ts.SyntaxKind.FirstLiteralToken && kind <= ts.SyntaxKind.LastTemplateToken) {
-      kinds.push(LITERAL, kind);
-      texts.push((n as ts.LiteralLikeNode).text);
-      continue;
-    }
-    kinds.push(kind);
-    if (kind === ts.SyntaxKind.BinaryExpression) kinds.push((n as ts.BinaryExpression).operatorToken.kind);
-    else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) kinds.push((n as ts.PrefixUnaryExpression).operator);
-  }
-  const hash = new Fnv64();
-  let t = 0;
-  for (let i = 0; i < kinds.length; i++) {
-    const k = kinds[i];
-    hash.int(k);
-    if (k === LITERAL) {
-      hash.int(kinds[++i]);
-      hash.text(texts[t++]);
-    } else if (k === NAME || k === LOCAL) {
-      const text = texts[t++];
-      const local = k === LOCAL ? locals.get(text) : undefined;
+      const property = isPropertyName(n);
+      hash.int(property ? NAME : LOCAL);
+      const local = property ? undefined : locals.get(text);
       if (local !== undefined) hash.int(local);
       else hash.text(text);
+    } else if (kind >= ts.SyntaxKind.FirstLiteralToken && kind <= ts.SyntaxKind.LastTemplateToken) {
+      hash.int(LITERAL);
+      hash.int(kind);
+      hash.text((n as ts.LiteralLikeNode).text);
+    } else {
+      hash.int(kind);
+      if (kind === ts.SyntaxKind.BinaryExpression) hash.int((n as ts.BinaryExpression).operatorToken.kind);
+      else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) hash.int((n as ts.PrefixUnaryExpression).operator);
     }
   }
   return hash.hex();
