@@ -34,4 +34,12 @@ describe('CodeLines on tricky lexical cases', () => {
     const lines = codeLines(['const half = total / 2; // one', '// two', 'next();'].join('\n'));
     expect([1, 2, 3].map((l) => lines.count(l, l))).toEqual([1, 0, 1]);
   });
+
+  it('should keep counting lines after a line continued with a backslash, in strings and templates, with either line ending', () => {
+    for (const eol of ['\n', '\r\n']) {
+      const lines = codeLines(['const s = "one \\', 'two";', 'const t = `three \\', 'four`;', '// five', 'six();'].join(eol));
+      expect([1, 2, 3, 4, 5, 6].map((l) => lines.count(l, l))).toEqual([1, 1, 1, 1, 0, 1]);
+    }
+  });
 });
+

@@ -3,8 +3,9 @@
  * =============
  * Marks which lines of a file hold code (at least one token), so that the lines of code of any
  * unit are one subtraction of prefix sums. Comments and blank lines are not code; every line of
- * a multi-line template is. One pass over the characters with a small lexer (code, string,
- * template, comment); `/` starts a regular expression unless it follows something that ends an
+ * a multi-line template is, and so is each line a string continues onto after a backslash. One
+ * pass over the characters with a small lexer (code, string, template, comment; comments are
+ * skipped with the engine's own `indexOf`); `/` starts a regular expression unless it follows something that ends an
  * operand — the usual heuristic, which can misjudge a line in rare code such as `return /re/`,
  * and then only by a line.
  */
@@ -51,8 +52,9 @@ export class CodeLines {
 
 /** isCode[line] = 1 for each 1-based line holding code. */
 function markCodeLines(text: string): Uint8Array {
+  const n = text.length;
   let lines = 1;
-  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === Ch.LineFeed) lines++;
+  for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) lines++;
   const isCode = new Uint8Array(lines + 1);
   // Brace depth at which each open `${` returns to its template.
   const templates: number[] = [];
@@ -60,14 +62,11 @@ function markCodeLines(text: string): Uint8Array {
   let line = 1;
   let lastSignificant = 0;
   let i = 0;
-  const n = text.length;
-  const newline = () => {
-    line++;
-  };
+  // One loop with the strings and templates inline: this runs over every character of every file.
   while (i < n) {
     const c = text.charCodeAt(i);
     if (c === Ch.LineFeed) {
-      newline();
+      line++;
       i++;
       continue;
     }
@@ -75,35 +74,65 @@ function markCodeLines(text: string): Uint8Array {
       i++;
       continue;
     }
-    if (c === Ch.Slash && text.charCodeAt(i + 1) === Ch.Slash) {
-      while (i < n && text.charCodeAt(i) !== Ch.LineFeed) i++;
-      continue;
-    }
-    if (c === Ch.Slash && text.charCodeAt(i + 1) === Ch.Asterisk) {
-      i += 2;
-      while (i < n && !(text.charCodeAt(i) === Ch.Asterisk && text.charCodeAt(i + 1) === Ch.Slash)) {
-        if (text.charCodeAt(i) === Ch.LineFeed) newline();
-        i++;
+    if (c === Ch.Slash) {
+      const next = text.charCodeAt(i + 1);
+      if (next === Ch.Slash) {
+        i = text.indexOf('\n', i);
+        if (i < 0) i = n;
+        continue;
       }
-      i += 2;
-      continue;
+      if (next === Ch.Asterisk) {
+        const close = text.indexOf('*/', i + 2);
+        const end = close < 0 ? n : close + 2;
+        for (let j = text.indexOf('\n', i + 2); j >= 0 && j < end; j = text.indexOf('\n', j + 1)) line++;
+        i = end;
+        continue;
+      }
     }
     isCode[line] = 1;
     if (c === Ch.SingleQuote || c === Ch.DoubleQuote) {
-      i = skipString(text, i, c, () => {
-        newline();
-        isCode[line] = 1;
-      });
+      // A string ends at its quote, or unterminated at the line's end; `\` + newline continues it.
+      i++;
+      while (i < n) {
+        const d = text.charCodeAt(i);
+        if (d === Ch.Backslash) {
+          const escaped = lineBreakLength(text, i + 1);
+          if (escaped > 0) isCode[++line] = 1;
+          i += 1 + Math.max(1, escaped);
+        } else if (d === c) {
+          i++;
+          break;
+        } else if (d === Ch.LineFeed) {
+          break;
+        } else {
+          i++;
+        }
+      }
     } else if (c === Ch.Backtick || (c === Ch.CloseBrace && templates.length > 0 && templates[templates.length - 1] === depth)) {
       if (c === Ch.CloseBrace) {
         templates.pop();
         depth--;
       }
-      i = skipTemplateText(text, i + 1, () => {
-        newline();
-        isCode[line] = 1;
-      });
-      if (text.charCodeAt(i - 1) === Ch.OpenBrace) templates.push(++depth);
+      // Template text runs to the closing backtick or an opening `${`; each of its lines is code.
+      i++;
+      while (i < n) {
+        const d = text.charCodeAt(i);
+        if (d === Ch.Backslash) {
+          const escaped = lineBreakLength(text, i + 1);
+          if (escaped > 0) isCode[++line] = 1;
+          i += 1 + Math.max(1, escaped);
+        } else if (d === Ch.Backtick) {
+          i++;
+          break;
+        } else if (d === Ch.Dollar && text.charCodeAt(i + 1) === Ch.OpenBrace) {
+          i += 2;
+          templates.push(++depth);
+          break;
+        } else {
+          if (d === Ch.LineFeed) isCode[++line] = 1;
+          i++;
+        }
+      }
     } else if (c === Ch.Slash && !endsOperand(lastSignificant)) {
       i = skipRegex(text, i);
     } else {
@@ -116,37 +145,11 @@ function markCodeLines(text: string): Uint8Array {
   return isCode;
 }
 
-function skipString(text: string, i: number, quote: number, onNewline: () => void): number {
-  i++;
-  while (i < text.length) {
-    const c = text.charCodeAt(i);
-    if (c === Ch.Backslash) {
-      if (text.charCodeAt(i + 1) === Ch.LineFeed) onNewline();
-      i += 2;
-    } else if (c === quote) {
-      return i + 1;
-    } else if (c === Ch.LineFeed) {
-      return i; // an unterminated string ends at the line's end
-    } else {
-      i++;
-    }
-  }
-  return i;
-}
-
-// From just after "`" or "}", to just after the closing "`" or an opening "${".
-function skipTemplateText(text: string, i: number, onNewline: () => void): number {
-  while (i < text.length) {
-    const c = text.charCodeAt(i);
-    if (c === Ch.Backslash) i += 2;
-    else if (c === Ch.Backtick) return i + 1;
-    else if (c === Ch.Dollar && text.charCodeAt(i + 1) === Ch.OpenBrace) return i + 2;
-    else {
-      if (c === Ch.LineFeed) onNewline();
-      i++;
-    }
-  }
-  return i;
+// Length of the line break at `i` (`\n`, `\r\n`; a lone `\r` is not one here), 0 when there is none.
+function lineBreakLength(text: string, i: number): number {
+  const c = text.charCodeAt(i);
+  if (c === Ch.LineFeed) return 1;
+  return c === Ch.CarriageReturn && text.charCodeAt(i + 1) === Ch.LineFeed ? 2 : 0;
 }
 
 function skipRegex(text: string, i: number): number {
