@@ -9,8 +9,8 @@ export { defaultThreads } from './AnalysisThreads';
  * Source bytes one extra thread must have to analyse before it pays for itself. Each thread
  * loads its own TypeScript compiler (half a second to a second here), and on two cores the
  * threads compete with the engine's own compiler and collector threads: measured on this
- * machine, a second thread made a 5 MB scan slower (docs/benchmarks.md). Threads started early
- * (see AnalysisThreads) are used anyway.
+ * machine, a second thread made a 5 MB scan slower, even one started at the very beginning of
+ * the process (docs/benchmarks.md).
  */
 export const BYTES_PER_THREAD = 16 * 1024 * 1024;
 
