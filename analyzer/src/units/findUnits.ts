@@ -28,6 +28,15 @@ export interface FoundUnit {
   nodes: ts.Node[];
 }
 
+/**
+ * Kinds of pure type syntax, as a table because the walk asks for every node: what
+ * `ts.isTypeNode` says, except an expression with type arguments (`extends Base<T>` runs `Base`).
+ */
+const TYPE_ONLY = new Uint8Array(ts.SyntaxKind.Count);
+for (let kind = 0; kind < TYPE_ONLY.length; kind++) {
+  TYPE_ONLY[kind] = kind !== ts.SyntaxKind.ExpressionWithTypeArguments && ts.isTypeNode({ kind } as ts.Node) ? 1 : 0;
+}
+
 /** Where a run of nodes stands: the names around it (display and stable form) and its unit's node list. */
 interface Scope {
   display: string[];
@@ -52,7 +61,7 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
     const node = nodes.pop()!;
     const scope = scopes.pop()!;
     // Types hold no code to run, so no units; their nodes are only linked and listed.
-    if (ts.isTypeNode(node) && !ts.isExpressionWithTypeArguments(node)) {
+    if (TYPE_ONLY[node.kind] === 1) {
       linkAndList(node, scope.nodes);
       continue;
     }
@@ -136,10 +145,15 @@ function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) =>
 
 /** Names that qualify the units inside them without being units themselves. */
 function scopeName(node: ts.Node, sourceFile: ts.SourceFile): string | undefined {
-  if (ts.isClassDeclaration(node) || ts.isClassExpression(node)) {
-    return node.name?.text ?? unitName(node, sourceFile) ?? '<class>';
+  switch (node.kind) {
+    case ts.SyntaxKind.ClassDeclaration:
+    case ts.SyntaxKind.ClassExpression:
+      return (node as ts.ClassLikeDeclaration).name?.text ?? unitName(node, sourceFile) ?? '<class>';
+    case ts.SyntaxKind.ModuleDeclaration:
+      return propertyNameText((node as ts.ModuleDeclaration).name, sourceFile);
+    case ts.SyntaxKind.ObjectLiteralExpression:
+      return unitName(node, sourceFile);
+    default:
+      return undefined;
   }
-  if (ts.isModuleDeclaration(node)) return propertyNameText(node.name, sourceFile);
-  if (ts.isObjectLiteralExpression(node)) return unitName(node, sourceFile);
-  return undefined;
 }
