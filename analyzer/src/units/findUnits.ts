@@ -85,7 +85,7 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
   return units;
 }
 
-// Children go on the stack last first, so they come off in source order.
+// Children are pushed in source order and then reversed, so they come off in source order.
 function pushChildren(nodes: ts.Node[], scopes: Scope[], node: ts.Node, scope: Scope): void {
   const start = nodes.length;
   ts.forEachChild(node, (child) => {
@@ -93,28 +93,36 @@ function pushChildren(nodes: ts.Node[], scopes: Scope[], node: ts.Node, scope: S
     nodes.push(child);
     scopes.push(scope);
   });
-  for (let i = start, j = nodes.length - 1; i < j; i++, j--) {
-    const first = nodes[i];
-    nodes[i] = nodes[j];
-    nodes[j] = first;
+  reverseFrom(nodes, start);
+}
+
+// Reverses `stack` from `start` on (the scopes pushed with a node's children are all the same).
+function reverseFrom(stack: ts.Node[], start: number): void {
+  for (let i = start, j = stack.length - 1; i < j; i++, j--) {
+    const first = stack[i];
+    stack[i] = stack[j];
+    stack[j] = first;
   }
 }
 
-/** Links every node under `node` to its parent. */
+/** Links every node under `node` to its parent (iteratively: a field's initializer can be thousands deep). */
 function linkParents(node: ts.Node): void {
-  ts.forEachChild(node, (child) => {
-    (child as { parent: ts.Node }).parent = node;
-    linkParents(child);
-  });
+  linkAndList(node, undefined);
 }
 
-/** Lists `node` and every node under it in pre-order, linking each to its parent. */
-function linkAndList(node: ts.Node, list: ts.Node[]): void {
-  list.push(node);
-  ts.forEachChild(node, (child) => {
-    (child as { parent: ts.Node }).parent = node;
-    linkAndList(child, list);
-  });
+/** Lists `root` and every node under it in pre-order, if `list` is given, linking each to its parent. */
+function linkAndList(root: ts.Node, list: ts.Node[] | undefined): void {
+  const stack: ts.Node[] = [root];
+  while (stack.length > 0) {
+    const node = stack.pop()!;
+    list?.push(node);
+    const start = stack.length;
+    ts.forEachChild(node, (child) => {
+      (child as { parent: ts.Node }).parent = node;
+      stack.push(child);
+    });
+    reverseFrom(stack, start);
+  }
 }
 
 function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) => boolean): FunctionKind | undefined {
