@@ -13,4 +13,6 @@ if (!fs.existsSync(main)) {
   process.exit(2);
 }
 
+// The compiler's bytecode is kept between runs (docs/decisions.md); SEAMLINE_CODE_CACHE=off turns that off.
+require(path.join(main, '..', '..', 'startup', 'compilerCodeCache.js')).enableCompilerCodeCache(process.env);
 require(main).runFromProcess();

@@ -1,7 +1,7 @@
 // analyzer/bin/seamline.js as users run it: compiled with the project's tsconfig.analyzer.json
 // into a scratch copy of the repository layout (so the repository's own dist/ is left alone).
 import { execFileSync, spawnSync } from 'node:child_process';
-import { promises as fsp, readFileSync } from 'node:fs';
+import { promises as fsp, readdirSync, readFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { syntheticFunction, syntheticSnapshot } from '../snapshot/fixtures/syntheticSnapshot';
@@ -24,8 +24,10 @@ async function layout(name: string): Promise<string> {
   return root;
 }
 
+// The compiler's code cache goes to the scratch folder, never to the user's own cache.
+const codeCache = () => path.join(scratch, 'code-cache');
 function node(script: string, args: string[], cwd: string) {
-  return spawnSync(process.execPath, [script, ...args], { cwd, encoding: 'utf8', timeout: 20000 });
+  return spawnSync(process.execPath, [script, ...args], { cwd, encoding: 'utf8', timeout: 20000, env: { ...process.env, SEAMLINE_CODE_CACHE: codeCache() } });
 }
 
 describe('analyzer/bin/seamline.js', () => {
@@ -83,5 +85,23 @@ describe('analyzer/bin/seamline.js', () => {
     // if-then-else (here a ternary): V = 2 (McCabe 1976, IEEE TSE SE-2(4)).
     expect(new Set(functions.map((r) => r.split(',')[cyclomatic]))).toEqual(new Set(['2']));
     expect(scan.stderr).toMatch(/^scanned 30 files · /m);
+
+    // The first scan saved the compiler's bytecode; the next ones take it back, or replace a
+    // damaged file, and measure the same.
+    const cacheFile = () => path.join(codeCache(), readdirSync(codeCache()).filter((name) => name.endsWith('.v8cache'))[0]);
+    expect(readdirSync(codeCache()).filter((name) => name.endsWith('.v8cache'))).toHaveLength(1);
+    const saved = readFileSync(cacheFile());
+    const again = node(bin, ['scan', 'code', '--format', 'csv'], root);
+    expect(again.status).toBe(0);
+    expect(again.stdout).toBe(scan.stdout);
+    expect(readFileSync(cacheFile())).toEqual(saved);
+    const damaged = Buffer.from(saved);
+    damaged[damaged.length >> 1] ^= 0xff;
+    await fsp.writeFile(cacheFile(), damaged);
+    const afterDamage = node(bin, ['scan', 'code', '--format', 'csv'], root);
+    expect(afterDamage.status).toBe(0);
+    expect(afterDamage.stdout).toBe(scan.stdout);
+    expect(readFileSync(cacheFile()).equals(damaged)).toBe(false);
+    expect(node(bin, ['scan', 'code', '--format', 'csv'], root).stdout).toBe(scan.stdout);
   }, 60000);
 });

@@ -8,6 +8,7 @@
  */
 import type { ScanOptions, ScanProgress } from '../project/scanDirectory';
 import type { Snapshot } from '../model/Snapshot';
+import { preloadCompiler } from '../startup/compilerCodeCache';
 
 /** The parts of the analyzer the CLI uses. */
 export interface CliDependencies {
@@ -32,6 +33,7 @@ type ScanModule = typeof import('../project/scanDirectory');
 let scanModule: ScanModule | undefined;
 
 function loadScanModule(): ScanModule {
+  if (!scanModule) preloadCompiler();
   // eslint-disable-next-line @typescript-eslint/no-require-imports
   scanModule ??= require('../project/scanDirectory') as ScanModule;
   return scanModule;

@@ -1,0 +1,30 @@
+/**
+ * The compiler through the code cache
+ * ===================================
+ * The `seamline` command switches this on before anything else; the scan then loads the compiler
+ * bundle (analyzer/src/compiler.ts) through the code cache before its first import of it, and the
+ * bytecode compiled during the run is saved when the process exits, if the cache was missing or
+ * out of date. Library users and test runners never switch it on and load the compiler as usual.
+ * Measured in docs/benchmarks.md; the choice is recorded in docs/decisions.md.
+ */
+import { requireWithCodeCache, type CachedModuleLoad } from './codeCache';
+import { codeCacheDir } from './codeCacheDir';
+
+/** The module analyzer/src/compiler.ts imports. */
+export const COMPILER_MODULE = '@ts-morph/common/dist/typescript.js';
+
+let enabledFor: NodeJS.ProcessEnv | undefined;
+let load: CachedModuleLoad | undefined;
+
+/** Lets `preloadCompiler` use the code cache in this process, and saves it at exit. */
+export function enableCompilerCodeCache(env: NodeJS.ProcessEnv = process.env): void {
+  if (enabledFor) return;
+  enabledFor = env;
+  process.once('exit', () => load?.save());
+}
+
+/** Loads the compiler through the code cache if this process enabled it; does nothing otherwise. */
+export function preloadCompiler(): void {
+  if (!enabledFor || load) return;
+  load = requireWithCodeCache(require.resolve(COMPILER_MODULE), codeCacheDir(enabledFor));
+}
