@@ -24,6 +24,8 @@ import type { FlowBuilder } from './FlowBuilder';
 import { forEachClassPart, forEachParentPart, isAssignmentPattern, isTypeOrAmbient, isUnitBoundary } from './unitBoundaries';
 
 const K = ts.SyntaxKind;
+// Read once: each `ts.` member is a getter on the compiler's module object, and this runs per node.
+const forEachChild = ts.forEachChild;
 
 /** Builds `node` as a value (see file header). */
 export function buildValue(b: FlowBuilder, node: ts.Node): void {
@@ -54,7 +56,7 @@ export function buildValue(b: FlowBuilder, node: ts.Node): void {
       return;
     default:
       if (isUnitBoundary(node)) forEachParentPart(node, b.visitValue);
-      else if (!isTypeOrAmbient(node)) ts.forEachChild(node, b.visitValue);
+      else if (!isTypeOrAmbient(node)) forEachChild(node, b.visitValue);
   }
 }
 

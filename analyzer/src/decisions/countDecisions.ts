@@ -31,6 +31,8 @@ import type { CountingSettings } from '../model/CountingSettings';
 import type { DecisionKind } from '../model/FlowGraph';
 
 const K = ts.SyntaxKind;
+// Read once: each `ts.` member is a getter on the compiler's module object, and this runs per node.
+const forEachChild = ts.forEachChild;
 
 /** A unit's decisions counted on the syntax tree. */
 export interface DecisionCount {
@@ -160,7 +162,7 @@ export function countDecisions(unit: ts.Node, _sourceFile: ts.SourceFile, settin
       default:
         break;
     }
-    ts.forEachChild(node, push);
+    forEachChild(node, push);
   }
   switches.sort((a, b) => a.pos - b.pos);
   return { total, byKind, casesPerSwitch: switches.map((s) => s.cases) };

@@ -28,13 +28,28 @@ export interface FoundUnit {
   nodes: ts.Node[];
 }
 
+const K = ts.SyntaxKind;
+// Read once: each `ts.` member is a getter on the compiler's module object.
+const forEachChild = ts.forEachChild;
+
 /**
  * Kinds of pure type syntax, as a table because the walk asks for every node: what
  * `ts.isTypeNode` says, except an expression with type arguments (`extends Base<T>` runs `Base`).
  */
-const TYPE_ONLY = new Uint8Array(ts.SyntaxKind.Count);
+const TYPE_ONLY = new Uint8Array(K.Count);
 for (let kind = 0; kind < TYPE_ONLY.length; kind++) {
-  TYPE_ONLY[kind] = kind !== ts.SyntaxKind.ExpressionWithTypeArguments && ts.isTypeNode({ kind } as ts.Node) ? 1 : 0;
+  TYPE_ONLY[kind] = kind !== K.ExpressionWithTypeArguments && ts.isTypeNode({ kind } as ts.Node) ? 1 : 0;
+}
+
+/**
+ * Kinds that may be a unit or name a scope (unitKind and scopeName say which), also as a table:
+ * most nodes are neither, and one lookup spares them both switches (each case reads the
+ * compiler's kind enum through a getter).
+ */
+const UNIT_OR_SCOPE = new Uint8Array(K.Count);
+for (const kind of [K.FunctionDeclaration, K.FunctionExpression, K.ArrowFunction, K.MethodDeclaration, K.Constructor, K.GetAccessor, K.SetAccessor,
+  K.ClassStaticBlockDeclaration, K.PropertyDeclaration, K.ClassDeclaration, K.ClassExpression, K.ModuleDeclaration, K.ObjectLiteralExpression]) {
+  UNIT_OR_SCOPE[kind] = 1;
 }
 
 /** Where a run of nodes stands: the names around it (display and stable form) and its unit's node list. */
@@ -66,8 +81,12 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
       continue;
     }
     scope.nodes.push(node);
+    if (UNIT_OR_SCOPE[node.kind] === 0) {
+      pushChildren(nodes, scopes, node, scope);
+      continue;
+    }
     // Counting a field's decisions reads parents below it (an object literal's methods).
-    if (node.kind === ts.SyntaxKind.PropertyDeclaration) linkParents(node);
+    if (node.kind === K.PropertyDeclaration) linkParents(node);
     const kind = unitKind(node, hasDecision);
     if (kind) {
       const own = unitName(node, sourceFile);
@@ -88,7 +107,7 @@ export function findUnits(sourceFile: ts.SourceFile, hasDecision: (field: ts.Pro
 // Children are pushed in source order and then reversed, so they come off in source order.
 function pushChildren(nodes: ts.Node[], scopes: Scope[], node: ts.Node, scope: Scope): void {
   const start = nodes.length;
-  ts.forEachChild(node, (child) => {
+  forEachChild(node, (child) => {
     (child as { parent: ts.Node }).parent = node;
     nodes.push(child);
     scopes.push(scope);
@@ -117,7 +136,7 @@ function linkAndList(root: ts.Node, list: ts.Node[] | undefined): void {
     const node = stack.pop()!;
     list?.push(node);
     const start = stack.length;
-    ts.forEachChild(node, (child) => {
+    forEachChild(node, (child) => {
       (child as { parent: ts.Node }).parent = node;
       stack.push(child);
     });
@@ -127,22 +146,22 @@ function linkAndList(root: ts.Node, list: ts.Node[] | undefined): void {
 
 function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) => boolean): FunctionKind | undefined {
   switch (node.kind) {
-    case ts.SyntaxKind.FunctionDeclaration:
-    case ts.SyntaxKind.FunctionExpression:
+    case K.FunctionDeclaration:
+    case K.FunctionExpression:
       return (node as ts.FunctionLikeDeclaration).body ? 'function' : undefined;
-    case ts.SyntaxKind.ArrowFunction:
+    case K.ArrowFunction:
       return 'arrow';
-    case ts.SyntaxKind.MethodDeclaration:
+    case K.MethodDeclaration:
       return (node as ts.MethodDeclaration).body ? 'method' : undefined;
-    case ts.SyntaxKind.Constructor:
+    case K.Constructor:
       return (node as ts.ConstructorDeclaration).body ? 'constructor' : undefined;
-    case ts.SyntaxKind.GetAccessor:
+    case K.GetAccessor:
       return (node as ts.GetAccessorDeclaration).body ? 'getter' : undefined;
-    case ts.SyntaxKind.SetAccessor:
+    case K.SetAccessor:
       return (node as ts.SetAccessorDeclaration).body ? 'setter' : undefined;
-    case ts.SyntaxKind.ClassStaticBlockDeclaration:
+    case K.ClassStaticBlockDeclaration:
       return 'static-block';
-    case ts.SyntaxKind.PropertyDeclaration: {
+    case K.PropertyDeclaration: {
       const field = node as ts.PropertyDeclaration;
       return field.initializer && hasDecision(field) ? 'field-initializer' : undefined;
     }
@@ -154,12 +173,12 @@ function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) =>
 /** Names that qualify the units inside them without being units themselves. */
 function scopeName(node: ts.Node, sourceFile: ts.SourceFile): string | undefined {
   switch (node.kind) {
-    case ts.SyntaxKind.ClassDeclaration:
-    case ts.SyntaxKind.ClassExpression:
+    case K.ClassDeclaration:
+    case K.ClassExpression:
       return (node as ts.ClassLikeDeclaration).name?.text ?? unitName(node, sourceFile) ?? '<class>';
-    case ts.SyntaxKind.ModuleDeclaration:
+    case K.ModuleDeclaration:
       return propertyNameText((node as ts.ModuleDeclaration).name, sourceFile);
-    case ts.SyntaxKind.ObjectLiteralExpression:
+    case K.ObjectLiteralExpression:
       return unitName(node, sourceFile);
     default:
       return undefined;

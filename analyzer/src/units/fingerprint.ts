@@ -15,6 +15,10 @@
  */
 import { ts } from '../compiler';
 
+// Read once: each `ts.` member is a getter on the compiler's module object, and these are read per node.
+const { Identifier, PrivateIdentifier, FirstLiteralToken, LastTemplateToken, BinaryExpression, PrefixUnaryExpression, PostfixUnaryExpression, Parameter,
+  VariableDeclaration, BindingElement, FunctionDeclaration, PropertyAccessExpression, PropertyAssignment } = ts.SyntaxKind;
+
 const PRIME = 16777619;
 
 class Fnv64 {
@@ -81,7 +85,7 @@ export function fingerprintOf(nodes: readonly ts.Node[]): string {
   const locals = new Map<string, number>();
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i];
-    if ((n.kind === ts.SyntaxKind.Identifier || n.kind === ts.SyntaxKind.PrivateIdentifier) && isDeclarationName(n)) {
+    if ((n.kind === Identifier || n.kind === PrivateIdentifier) && isDeclarationName(n)) {
       const text = (n as ts.Identifier).text;
       if (!locals.has(text)) locals.set(text, locals.size);
     }
@@ -90,21 +94,21 @@ export function fingerprintOf(nodes: readonly ts.Node[]): string {
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i];
     const kind = n.kind;
-    if (kind === ts.SyntaxKind.Identifier || kind === ts.SyntaxKind.PrivateIdentifier) {
+    if (kind === Identifier || kind === PrivateIdentifier) {
       const text = (n as ts.Identifier).text;
       const property = isPropertyName(n);
       hash.int(property ? NAME : LOCAL);
       const local = property ? undefined : locals.get(text);
       if (local !== undefined) hash.int(local);
       else hash.text(text);
-    } else if (kind >= ts.SyntaxKind.FirstLiteralToken && kind <= ts.SyntaxKind.LastTemplateToken) {
+    } else if (kind >= FirstLiteralToken && kind <= LastTemplateToken) {
       hash.int(LITERAL);
       hash.int(kind);
       hash.text((n as ts.LiteralLikeNode).text);
     } else {
       hash.int(kind);
-      if (kind === ts.SyntaxKind.BinaryExpression) hash.int((n as ts.BinaryExpression).operatorToken.kind);
-      else if (kind === ts.SyntaxKind.PrefixUnaryExpression || kind === ts.SyntaxKind.PostfixUnaryExpression) hash.int((n as ts.PrefixUnaryExpression).operator);
+      if (kind === BinaryExpression) hash.int((n as ts.BinaryExpression).operatorToken.kind);
+      else if (kind === PrefixUnaryExpression || kind === PostfixUnaryExpression) hash.int((n as ts.PrefixUnaryExpression).operator);
     }
   }
   return hash.hex();
@@ -115,10 +119,10 @@ function isDeclarationName(id: ts.Node): boolean {
   const parent = id.parent;
   if (!parent) return false;
   switch (parent.kind) {
-    case ts.SyntaxKind.Parameter:
-    case ts.SyntaxKind.VariableDeclaration:
-    case ts.SyntaxKind.BindingElement:
-    case ts.SyntaxKind.FunctionDeclaration:
+    case Parameter:
+    case VariableDeclaration:
+    case BindingElement:
+    case FunctionDeclaration:
       return (parent as ts.NamedDeclaration).name === id;
     default:
       return false;
@@ -128,5 +132,5 @@ function isDeclarationName(id: ts.Node): boolean {
 // `order.total` — `total` names a property, not a local, even if a local is also called `total`.
 function isPropertyName(id: ts.Node): boolean {
   const parent = id.parent;
-  return !!parent && ((ts.isPropertyAccessExpression(parent) && parent.name === id) || (ts.isPropertyAssignment(parent) && parent.name === id));
+  return !!parent && ((parent.kind === PropertyAccessExpression || parent.kind === PropertyAssignment) && (parent as ts.PropertyAccessExpression | ts.PropertyAssignment).name === id);
 }
