@@ -28,3 +28,29 @@ describe('classifySource with another line limit', () => {
     expect(classifySource(`${'x+'.repeat(600)}1;`, 100)?.reason).toBe('minified');
   });
 });
+
+describe('classifySource, line by line', () => {
+  const long = 'x'.repeat(1001);
+
+  it('should report whichever comes first, the marker winning on its own line', () => {
+    expect(classifySource(`${long}\n// @generated\n`)).toEqual({ reason: 'minified', detail: 'line 1 has 1001 characters (more than 1000)' });
+    expect(classifySource(`// @generated\n${long}\n`)).toEqual({ reason: 'generated', detail: 'a @generated marker on line 1' });
+    expect(classifySource(`/* @generated */ ${long}\n`)).toEqual({ reason: 'generated', detail: 'a @generated marker on line 1' });
+  });
+
+  it('should find the marker on the tenth line and not on the eleventh', () => {
+    expect(classifySource(`${'a;\n'.repeat(9)}// @generated\n`)).toEqual({ reason: 'generated', detail: 'a @generated marker on line 10' });
+    expect(classifySource(`${'a;\n'.repeat(10)}// @generated\n`)).toBeUndefined();
+    expect(classifySource(`${'a;\r\n'.repeat(9)}// @generated\r\n`, 0)?.detail).toBe('a @generated marker on line 10');
+  });
+
+  it('should count a carriage return and measure the last line without a newline', () => {
+    expect(classifySource(`${'x'.repeat(1000)}\r\n`)?.detail).toBe('line 1 has 1001 characters (more than 1000)');
+    expect(classifySource(`${'x'.repeat(1000)}\n`)).toBeUndefined();
+    expect(classifySource(`a;\n${long}`)?.detail).toBe('line 2 has 1001 characters (more than 1000)');
+  });
+
+  it('should find a long line after a marker that came too late to count', () => {
+    expect(classifySource(`${'a;\n'.repeat(12)}// @generated\n${long}\n`)?.detail).toBe('line 14 has 1001 characters (more than 1000)');
+  });
+});
