@@ -70,6 +70,8 @@ describe('the Flow screen', () => {
     await page.getByRole('radio', { name: 'Path 2', exact: true }).check();
     await page.waitForURL(/[?&]path=2\b/);
     const pathBlocks = new Set(detail.basisPaths[1].blocks).size;
+    // The URL changes first and the graph redraws after it: wait for the marks, then count them.
+    await page.locator('svg.graph g.block.on-path').first().waitFor();
     await expect(page.locator('svg.graph g.block.on-path').count()).resolves.toBe(pathBlocks);
     await expect(page.locator('svg.graph path.edge.on-path').count()).resolves.toBeGreaterThan(0);
     await page.locator('section.graph').scrollIntoViewIfNeeded();
