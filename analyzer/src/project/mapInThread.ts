@@ -2,6 +2,7 @@ import * as fs from 'node:fs';
 import * as path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { FunctionRecord } from '../model';
+import { compilerCodeCacheDir } from '../startup/compilerCodeCache';
 import type { mapCodebase, MapInput } from './mapCodebase';
 
 /** Stack for the module-map thread: the checker overflows Node's default on very large files (stack.md). */
@@ -19,7 +20,8 @@ export function mapInThread(input: MapInput, functions: FunctionRecord[]): Promi
     return Promise.resolve(mapHere(input, functions));
   }
   return new Promise((resolve, reject) => {
-    const worker = new Worker(script, { workerData: { input, functions }, resourceLimits: { stackSizeMb: MAP_STACK_MB } });
+    const workerData = { input, functions, codeCacheDir: compilerCodeCacheDir() };
+    const worker = new Worker(script, { workerData, resourceLimits: { stackSizeMb: MAP_STACK_MB } });
     let settled = false;
     worker.once('message', (message: { result?: ReturnType<typeof mapCodebase>; error?: string }) => {
       settled = true;

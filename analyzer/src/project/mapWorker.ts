@@ -2,9 +2,13 @@
 // so it runs here, with the larger stack its parent gives this thread.
 import { parentPort, workerData } from 'node:worker_threads';
 import type { FunctionRecord } from '../model';
-import { mapCodebase, type MapInput } from './mapCodebase';
+import { preloadCompilerInThread } from '../startup/compilerCodeCache';
+import type { MapInput } from './mapCodebase';
 
-const { input, functions } = workerData as { input: MapInput; functions: FunctionRecord[] };
+const { input, functions, codeCacheDir } = workerData as { input: MapInput; functions: FunctionRecord[]; codeCacheDir?: string };
+// The compiler through the parent's code cache, before the map's modules import it.
+preloadCompilerInThread(codeCacheDir);
+const { mapCodebase } = require('./mapCodebase') as typeof import('./mapCodebase');
 try {
   parentPort!.postMessage({ result: mapCodebase(input, functions) });
 } catch (err) {

@@ -28,3 +28,16 @@ export function preloadCompiler(): void {
   if (!enabledFor || load) return;
   load = requireWithCodeCache(require.resolve(COMPILER_MODULE), codeCacheDir(enabledFor));
 }
+
+/** The folder the calling thread's code cache is in, for a worker thread to read (undefined when off). */
+export function compilerCodeCacheDir(): string | undefined {
+  return enabledFor ? codeCacheDir(enabledFor) : undefined;
+}
+
+/**
+ * In a worker thread, before anything imports the compiler: loads it through the cache the
+ * parent thread uses. Only the parent saves, so threads never race to write the file.
+ */
+export function preloadCompilerInThread(cacheDir: string | undefined): void {
+  if (cacheDir !== undefined) requireWithCodeCache(require.resolve(COMPILER_MODULE), cacheDir);
+}
