@@ -81,7 +81,7 @@ export function requireWithCodeCache(filename: string, cacheDir: string | undefi
       return loaded.exports;
     },
     status,
-    save: status === 'hit' ? () => undefined : () => writeCache(cacheDir, cacheFile, base, script.createCachedData()),
+    save: status === 'hit' ? () => undefined : () => writeCache(cacheDir, cacheFile, base, () => script.createCachedData()),
   };
 }
 
@@ -107,9 +107,10 @@ function readVerified(file: string): Buffer | undefined {
 }
 
 /** Writes atomically (temporary file, then rename) and removes the same module's older caches. */
-function writeCache(cacheDir: string, cacheFile: string, base: string, payload: Buffer): void {
+function writeCache(cacheDir: string, cacheFile: string, base: string, produce: () => Buffer): void {
   const temp = `${cacheFile}.${process.pid}.tmp`;
   try {
+    const payload = produce();
     const header = createHash('sha1').update(payload).digest();
     fs.writeFileSync(temp, Buffer.concat([header, payload]), { mode: 0o600 });
     fs.renameSync(temp, cacheFile);

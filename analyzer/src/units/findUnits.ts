@@ -144,6 +144,7 @@ function linkAndList(root: ts.Node, list: ts.Node[] | undefined): void {
   }
 }
 
+// A kind added to unitKind or scopeName must be added to UNIT_OR_SCOPE too.
 function unitKind(node: ts.Node, hasDecision: (field: ts.PropertyDeclaration) => boolean): FunctionKind | undefined {
   switch (node.kind) {
     case K.FunctionDeclaration:
