@@ -15,6 +15,8 @@ export const COMPILER_MODULE = '@ts-morph/common/dist/typescript.js';
 
 let enabledFor: NodeJS.ProcessEnv | undefined;
 let load: CachedModuleLoad | undefined;
+// Resolved (created and checked) on first use, once per process.
+let dir: { path: string | undefined } | undefined;
 
 /** Lets `preloadCompiler` use the code cache in this process, and saves it at exit. */
 export function enableCompilerCodeCache(env: NodeJS.ProcessEnv = process.env): void {
@@ -26,12 +28,14 @@ export function enableCompilerCodeCache(env: NodeJS.ProcessEnv = process.env): v
 /** Loads the compiler through the code cache if this process enabled it; does nothing otherwise. */
 export function preloadCompiler(): void {
   if (!enabledFor || load) return;
-  load = requireWithCodeCache(require.resolve(COMPILER_MODULE), codeCacheDir(enabledFor));
+  load = requireWithCodeCache(require.resolve(COMPILER_MODULE), compilerCodeCacheDir());
 }
 
 /** The folder the calling thread's code cache is in, for a worker thread to read (undefined when off). */
 export function compilerCodeCacheDir(): string | undefined {
-  return enabledFor ? codeCacheDir(enabledFor) : undefined;
+  if (!enabledFor) return undefined;
+  dir ??= { path: codeCacheDir(enabledFor) };
+  return dir.path;
 }
 
 /**
